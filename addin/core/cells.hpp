@@ -1,0 +1,65 @@
+// Spreadsheet values as the add-in receives them, without any UNO type: what Calc passes
+// for one argument (omitted, one value, or a whole range) and what a call gives back.
+#pragma once
+
+#include <cstddef>
+#include <cstdint>
+#include <string>
+#include <vector>
+
+namespace coilwright::sheet {
+
+enum class CellKind : std::uint8_t { Number, Text, Empty };
+
+struct Cell {
+    CellKind kind = CellKind::Empty;
+    double number = 0.0;
+    std::string text;  // UTF-8, only for Text
+
+    static Cell of(double v) { return {CellKind::Number, v, {}}; }
+    static Cell of_text(std::string s) { return {CellKind::Text, 0.0, std::move(s)}; }
+};
+
+// One argument of a call: omitted, a single value, or a range / inline array (row-major).
+struct Arg {
+    enum class Form : std::uint8_t { Missing, Scalar, Array };
+    Form form = Form::Missing;
+    std::size_t rows = 0, cols = 0;
+    std::vector<Cell> cells;  // 1 cell for Scalar, rows*cols for Array
+
+    static Arg missing() { return {}; }
+    static Arg scalar(Cell c) { return {Form::Scalar, 1, 1, {std::move(c)}}; }
+    static Arg number(double v) { return scalar(Cell::of(v)); }
+    static Arg array(std::size_t rows, std::size_t cols, std::vector<Cell> cells) {
+        return {Form::Array, rows, cols, std::move(cells)};
+    }
+    const Cell& at(std::size_t r, std::size_t c) const { return cells[r * cols + c]; }
+};
+
+// Spreadsheet error codes as Calc numbers them (shown as Err:502, Err:523, #VALUE!).
+enum class CellError : std::uint16_t {
+    None = 0,
+    IllegalArgument = 502,
+    NoConvergence = 523,
+    NoValue = 519,
+};
+
+struct CallResult {
+    // Whole-call failure: the cell (or every cell of the array formula) shows this error.
+    CellError error = CellError::None;
+    std::string message;
+
+    bool is_array = false;           // false: one value in values[0]
+    std::size_t rows = 1, cols = 1;
+    std::vector<double> values;      // row-major
+    std::vector<CellError> errors;   // per element, same size as values (None where valid)
+
+    static CallResult failure(CellError e, std::string msg) {
+        CallResult r;
+        r.error = e;
+        r.message = std::move(msg);
+        return r;
+    }
+};
+
+}  // namespace coilwright::sheet

@@ -1,0 +1,35 @@
+#include "registry.hpp"
+
+#include <string_view>
+
+#include "catalogue.hpp"
+
+namespace coilwright::sheet {
+
+Implementation numeric(const char* name, ElementFn fn, double cost) {
+    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost}; }};
+}
+
+std::vector<Implementation> contributed_implementations() {
+    std::vector<Implementation> all;
+    for (auto&& list : {loop_functions()})
+        for (auto& impl : list) all.push_back(impl);
+    return all;
+}
+
+const std::vector<Implementation>& implementations() {
+    // Built once, read-only afterwards (thread-safe static initialisation).
+    static const std::vector<Implementation> ordered = [] {
+        const std::vector<Implementation> all = contributed_implementations();
+        const auto specs = function_specs();
+        std::vector<Implementation> out(specs.size(), Implementation{nullptr, {}});
+        for (auto& impl : all) {
+            const int i = function_index(impl.name);
+            if (i >= 0) out[static_cast<std::size_t>(i)] = impl;
+        }
+        return out;
+    }();
+    return ordered;
+}
+
+}  // namespace coilwright::sheet

@@ -1,0 +1,22 @@
+// Conversion between UNO Any values and the add-in's UNO-free cells.
+#pragma once
+
+#include <com/sun/star/uno/Any.hxx>
+
+#include "../core/cells.hpp"
+
+namespace coilwright::uno_glue {
+
+// What Calc passes for an `any` parameter: void (omitted), double, string, or a range as
+// sequence< sequence< any > >.
+sheet::Arg to_arg(const css::uno::Any& value);
+
+// A double for one value, or sequence< sequence< double > > with error elements encoded as
+// Calc's error NaNs. Whole-call failures are thrown by the caller, not converted here.
+css::uno::Any to_any(const sheet::CallResult& result);
+
+// Calc's in-band error value: a quiet NaN whose low 32 bits carry the error number
+// (LibreOffice formula/errorcodes.hxx, CreateDoubleError).
+double calc_error_value(sheet::CellError error);
+
+}  // namespace coilwright::uno_glue

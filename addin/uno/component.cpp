@@ -1,0 +1,78 @@
+// The UNO component Calc instantiates: the interface generated from idl/functions.toml plus
+// XServiceName and XServiceInfo. Every method forwards to dispatch(), which converts the
+// arguments, runs the UNO-free evaluation and maps failures to exceptions Calc shows as
+// error cells (IllegalArgumentException: Err:502, NoConvergenceException: Err:523).
+#include <com/sun/star/lang/IllegalArgumentException.hpp>
+#include <com/sun/star/lang/XServiceInfo.hpp>
+#include <com/sun/star/lang/XServiceName.hpp>
+#include <com/sun/star/sheet/NoConvergenceException.hpp>
+#include <com/sun/star/uno/XComponentContext.hpp>
+#include <cppuhelper/implbase3.hxx>
+#include <cppuhelper/supportsservice.hxx>
+#include <org/coilwright/XFunctions.hpp>
+
+#include <array>
+#include <exception>
+
+#include "../core/evaluate.hpp"
+#include "any_conversion.hpp"
+#include "../core/catalogue.hpp"
+
+using rtl::OUString;
+namespace uno = css::uno;
+
+namespace coilwright::uno_glue {
+
+namespace {
+
+class FunctionsComponent
+    : public cppu::WeakImplHelper3<org::coilwright::XFunctions, css::lang::XServiceName, css::lang::XServiceInfo> {
+public:
+    // XServiceName: the name Calc writes into saved formulas.
+    OUString SAL_CALL getServiceName() override { return OUString::createFromAscii(sheet::addin_service_name()); }
+
+    // XServiceInfo
+    OUString SAL_CALL getImplementationName() override { return OUString::createFromAscii(sheet::addin_service_name()); }
+    sal_Bool SAL_CALL supportsService(const OUString& name) override { return cppu::supportsService(this, name); }
+    uno::Sequence<OUString> SAL_CALL getSupportedServiceNames() override {
+        uno::Sequence<OUString> names(2);
+        names.getArray()[0] = OUString::createFromAscii(sheet::addin_service_name());
+        names.getArray()[1] = "com.sun.star.sheet.AddIn";
+        return names;
+    }
+
+#include "addin_methods.inc"
+
+private:
+    uno::Any dispatch(std::size_t index, const uno::Any* const* args, std::size_t count) {
+        sheet::CallResult result;
+        try {
+            std::array<sheet::Arg, 16> converted;  // no function has more arguments (checked by a test)
+            if (count > converted.size()) throw std::length_error("too many arguments");
+            for (std::size_t i = 0; i < count; ++i) converted[i] = to_arg(*args[i]);
+            result = sheet::evaluate(index, {converted.data(), count});
+        } catch (const std::exception& e) {
+            // Nothing may escape into Calc but the exceptions it understands.
+            result = sheet::CallResult::failure(sheet::CellError::NoValue, e.what());
+        }
+        if (result.error == sheet::CellError::None) return to_any(result);
+        const OUString message = OUString::fromUtf8(result.message.c_str());
+        if (result.error == sheet::CellError::NoConvergence)
+            throw css::sheet::NoConvergenceException(message, static_cast<cppu::OWeakObject*>(this));
+        if (result.error == sheet::CellError::IllegalArgument)
+            throw css::lang::IllegalArgumentException(message, static_cast<cppu::OWeakObject*>(this), 0);
+        throw uno::RuntimeException(message, static_cast<cppu::OWeakObject*>(this));
+    }
+};
+
+}  // namespace
+
+}  // namespace coilwright::uno_glue
+
+// Constructor named in the .components file.
+extern "C" SAL_DLLPUBLIC_EXPORT uno::XInterface* org_coilwright_Functions_get_implementation(
+    uno::XComponentContext*, const uno::Sequence<uno::Any>&) {
+    auto* component = new coilwright::uno_glue::FunctionsComponent();
+    component->acquire();
+    return static_cast<cppu::OWeakObject*>(component);
+}

@@ -1,0 +1,73 @@
+// Field of a thin circular loop in a form without cancellation.
+//
+// With alpha and beta the shortest and longest distances from the field point to the loop in
+// its meridian plane, kc = alpha / beta and k^2 = 1 - kc^2 = 4 a r / beta^2, the Biot-Savart
+// integrals reduce (substituting theta = pi - 2t) to
+//   Bz = mu0 I a / (pi beta^3) * integral ((a + r) cos^2 t + (a - r) sin^2 t) / D^3 dt
+//   Br = mu0 I a z / (pi beta^3) * integral (sin^2 t - cos^2 t) / D^3 dt,
+// with D = sqrt(cos^2 t + kc^2 sin^2 t), i.e. Bulirsch's cel(kc, kc^2, ., .).
+// The radial integral vanishes like k^2 near the axis and in the far field; after the first
+// Gauss step its state is k^2 * (1/kc^2, 2/(kc (1+kc))), so k^2 is factored out exactly and
+// the rest of the iteration is all-positive. Writing Bz = 2aP + (a - r) * (radial integral)
+// with P = cel(kc, kc^2, 1, 0) removes the far-field cancellation of (a + r) against (a - r).
+// Method: M. Ortner, P. Leitner, F. Slanovc, Magnetism 3(1) (2023) 11-31, with Bulirsch's
+// cel (Numer. Math. 13, 1969); the algebra above is our own arrangement of it.
+#include "coilwright/loop.hpp"
+
+#include <cmath>
+
+#include "coilwright/bulirsch_cel.hpp"
+#include "coilwright/checks.hpp"
+#include "coilwright/constants.hpp"
+#include "coilwright/errors.hpp"
+
+namespace coilwright {
+
+void validate(const LoopSpec& loop) {
+    check::positive(loop.radius, "radius");
+    check::non_negative(loop.turns, "turns");
+    check::finite(loop.current, "current");
+}
+
+namespace detail {
+
+FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
+    const double alpha = std::hypot(one_minus_r, z_n);
+    if (alpha == 0.0) throw SingularPointError("the point lies on the current filament");
+    const double beta = std::hypot(1.0 + r_n, z_n);
+    const double kc = alpha / beta;
+    const double k2 = (4.0 * r_n / beta) / beta;
+
+    // State after the first Gauss step of cel(kc, kc^2, 1, 0) [index 0] and of
+    // cel(kc, kc^2, -1, 1) / k^2 [index 1]; p = sqrt(kc^2) = kc on entry.
+    CelLoop<2> s{};
+    s.qc = kc;
+    s.p = 1.0 + kc;
+    s.g = 1.0;
+    s.em = 1.0 + kc;
+    s.e = kc;
+    s.a = {1.0, 1.0 / (kc * kc)};
+    s.b = {2.0, 2.0 / (kc * (1.0 + kc))};
+    const auto [P, C2] = s.finish();
+
+    const double pref = 1.0 / (kPi * beta * beta * beta);
+    const double radial = k2 * C2;  // integral (sin^2 - cos^2) / D^3, positive
+    return {pref * (2.0 * P + one_minus_r * radial), pref * z_n * radial};
+}
+
+}  // namespace detail
+
+FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
+    validate(loop);
+    check::finite(z, "z");
+    check::non_negative(r, "r");
+    const double a = loop.radius;
+    const FieldRZ unit = detail::loop_field_normalized(z / a, r / a, (a - r) / a);
+    const double scale = kMu0 * loop.turns * loop.current / a;
+    const FieldRZ f = scale * unit;
+    check::finite_result(f.bz, "Bz");
+    check::finite_result(f.br, "Br");
+    return f;
+}
+
+}  // namespace coilwright

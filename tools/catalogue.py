@@ -1,0 +1,227 @@
+#!/usr/bin/env python3
+"""Generate every artefact that describes the spreadsheet functions from idl/functions.toml.
+
+One catalogue, several views, so the names, arguments and help cannot drift apart:
+  idl            the UNO interface the add-in implements
+  cxx            C++ argument specs (UNO-free core) and the add-in's method glue
+  xcu            CalcAddIns configuration: display names, descriptions, argument help
+  readme-table   the README's function reference (check-readme / update-readme keep it in step)
+"""
+import argparse
+import html
+import pathlib
+import sys
+import tomllib
+
+IDL_KEYWORDS = {
+    "any", "attribute", "boolean", "bound", "byte", "char", "const", "constants", "constrained",
+    "double", "enum", "exception", "float", "hyper", "in", "inout", "interface", "long",
+    "maybevoid", "method", "module", "needs", "observes", "oneway", "optional", "out",
+    "property", "published", "raises", "readonly", "removable", "sequence", "service",
+    "short", "singleton", "string", "struct", "transient", "type", "typedef", "unsigned", "void",
+}
+KINDS = {"number", "gauge", "table"}
+README_BEGIN = "<!-- function-table:begin (generated from idl/functions.toml; do not edit) -->"
+README_END = "<!-- function-table:end -->"
+
+
+def load(path):
+    with open(path, "rb") as f:
+        data = tomllib.load(f)
+    names = set()
+    for fn in data["function"]:
+        if fn["name"] in names:
+            sys.exit(f"catalogue: duplicate function {fn['name']}")
+        names.add(fn["name"])
+        seen_optional = False
+        arg_names = set()
+        for arg in fn["args"]:
+            kind = arg.setdefault("kind", "number")
+            if kind not in KINDS:
+                sys.exit(f"catalogue: {fn['name']}.{arg['name']}: unknown kind {kind}")
+            if arg["name"] in IDL_KEYWORDS or not arg["name"].isidentifier():
+                sys.exit(f"catalogue: {fn['name']}: bad argument name {arg['name']}")
+            if arg["name"] in arg_names:
+                sys.exit(f"catalogue: {fn['name']}: duplicate argument {arg['name']}")
+            arg_names.add(arg["name"])
+            if "default" in arg:
+                seen_optional = True
+            elif seen_optional:
+                sys.exit(f"catalogue: {fn['name']}: required {arg['name']} after an optional argument")
+            for key in ("unit", "help"):
+                if not arg.get(key):
+                    sys.exit(f"catalogue: {fn['name']}.{arg['name']}: missing {key}")
+        for key in ("group", "returns", "summary", "accuracy"):
+            if not fn.get(key):
+                sys.exit(f"catalogue: {fn['name']}: missing {key}")
+    return data
+
+
+def gen_idl(data):
+    a = data["addin"]
+    mods = a["module"].split(".")
+    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+           "#include <com/sun/star/uno/XInterface.idl>", ""]
+    out += [f"module {m} {{" for m in mods]
+    out.append(f"interface {a['interface']} : com::sun::star::uno::XInterface")
+    out.append("{")
+    for fn in data["function"]:
+        params = ", ".join(f"[in] any {arg['name']}" for arg in fn["args"])
+        out.append(f"    any {fn['name']}({params});")
+    out.append("};")
+    out += ["};" for _ in mods]
+    return "\n".join(out) + "\n"
+
+
+def cxx_string(s):
+    return '"' + s.replace("\\", "\\\\").replace('"', '\\"') + '"'
+
+
+def gen_specs(data):
+    """UNO-free argument specifications, one table indexed like the IDL methods."""
+    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+           "// Included by addin/core/catalogue.cpp.", "",
+           f"const char kServiceName[] = {cxx_string(data['addin']['service'])};", ""]
+    for fn in data["function"]:
+        rows = []
+        for arg in fn["args"]:
+            optional = "true" if "default" in arg else "false"
+            default = repr(float(arg.get("default", 0.0)))
+            rows.append(f"    {{{cxx_string(arg['name'])}, ArgKind::{arg['kind'].capitalize()}, {optional}, {default}}},")
+        out.append(f"const ArgSpec kArgs_{fn['name']}[] = {{")
+        out += rows
+        out.append("};")
+    out.append("")
+    out.append("const FunctionSpec kFunctionSpecs[] = {")
+    for fn in data["function"]:
+        out.append(f"    {{{cxx_string(fn['name'])}, kArgs_{fn['name']}, {len(fn['args'])}}},")
+    out.append("};")
+    return "\n".join(out) + "\n"
+
+
+def gen_methods(data):
+    """Method declarations for the add-in class body: each forwards to one dispatcher."""
+    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+           "// Included inside the add-in class body (addin/uno/component.cpp).", ""]
+    for index, fn in enumerate(data["function"]):
+        params = ", ".join(f"const css::uno::Any& {arg['name']}" for arg in fn["args"])
+        ptrs = ", ".join(f"&{arg['name']}" for arg in fn["args"])
+        n = len(fn["args"])
+        out.append(f"css::uno::Any SAL_CALL {fn['name']}({params}) override {{")
+        out.append(f"    const css::uno::Any* args[{n}] = {{{ptrs}}};")
+        out.append(f"    return dispatch({index}, args, {n});")
+        out.append("}")
+    return "\n".join(out) + "\n"
+
+
+def xml_value(text, lang=True):
+    attr = ' xml:lang="en-US"' if lang else ""
+    return f"<value{attr}>{html.escape(text, quote=False)}</value>"
+
+
+def arg_help(arg):
+    text = arg["help"]
+    if "default" in arg:
+        text += " Optional."
+    return text
+
+
+def gen_xcu(data):
+    a = data["addin"]
+    out = ['<?xml version="1.0" encoding="UTF-8"?>',
+           "<!-- Generated from idl/functions.toml by tools/catalogue.py: do not edit. -->",
+           '<oor:component-data xmlns:oor="http://openoffice.org/2001/registry" '
+           'xmlns:xs="http://www.w3.org/2001/XMLSchema" oor:name="CalcAddIns" oor:package="org.openoffice.Office">',
+           '  <node oor:name="AddInInfo">',
+           f'    <node oor:name="{a["service"]}" oor:op="replace">',
+           '      <node oor:name="AddInFunctions">']
+    for fn in data["function"]:
+        desc = a["description_prefix"] + fn["summary"] + f" Returns {fn['returns']}."
+        out += [f'        <node oor:name="{fn["name"]}" oor:op="replace">',
+                f'          <prop oor:name="DisplayName">{xml_value(fn["name"])}</prop>',
+                f'          <prop oor:name="Description">{xml_value(desc)}</prop>',
+                f'          <prop oor:name="Category">{xml_value(a["category"], lang=False)}</prop>',
+                f'          <prop oor:name="CompatibilityName">{xml_value(fn["name"])}</prop>',
+                '          <node oor:name="Parameters">']
+        for arg in fn["args"]:
+            out += [f'            <node oor:name="{arg["name"]}" oor:op="replace">',
+                    f'              <prop oor:name="DisplayName">{xml_value(arg["name"])}</prop>',
+                    f'              <prop oor:name="Description">{xml_value(arg_help(arg))}</prop>',
+                    "            </node>"]
+        out += ["          </node>", "        </node>"]
+    out += ["      </node>", "    </node>", "  </node>", "</oor:component-data>"]
+    return "\n".join(out) + "\n"
+
+
+def md(text):
+    return text.replace("|", "\\|")
+
+
+def gen_readme_table(data):
+    out = [README_BEGIN]
+    group = None
+    for fn in data["function"]:
+        if fn["group"] != group:
+            group = fn["group"]
+            out += ["", f"#### {group}", "",
+                    "| function | arguments (units) | returns | accuracy |",
+                    "|---|---|---|---|"]
+        args = []
+        for arg in fn["args"]:
+            text = f"{arg['name']} [{arg['unit']}]"
+            if "default" in arg:
+                text = f"[{arg['name']} [{arg['unit']}] = {arg['default']:g}]"
+            args.append(text)
+        out.append(f"| `{fn['name']}` | {md('; '.join(args))} | {md(fn['summary'])} ({md(fn['returns'])}) "
+                   f"| {md(fn['accuracy'])} |")
+    out += ["", README_END]
+    return "\n".join(out) + "\n"
+
+
+def readme_parts(readme_text):
+    try:
+        head, rest = readme_text.split(README_BEGIN, 1)
+        _, tail = rest.split(README_END, 1)
+    except ValueError:
+        sys.exit("README.md has no function-table markers")
+    return head, tail
+
+
+def main():
+    ap = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
+    ap.add_argument("what", choices=["idl", "specs", "methods", "xcu", "readme-table", "check-readme", "update-readme"])
+    ap.add_argument("--catalogue", default=str(pathlib.Path(__file__).resolve().parent.parent / "idl" / "functions.toml"))
+    ap.add_argument("--out", help="output file (default: stdout); README path for *-readme")
+    opts = ap.parse_args()
+    data = load(opts.catalogue)
+
+    if opts.what in ("check-readme", "update-readme"):
+        path = pathlib.Path(opts.out or pathlib.Path(opts.catalogue).resolve().parent.parent / "README.md")
+        text = path.read_text(encoding="utf-8")
+        head, tail = readme_parts(text)
+        wanted = head + gen_readme_table(data).rstrip("\n") + tail
+        if opts.what == "update-readme":
+            path.write_text(wanted, encoding="utf-8")
+            return 0
+        if wanted != text:
+            print(f"{path}: function table differs from idl/functions.toml; run "
+                  "'python3 tools/catalogue.py update-readme'", file=sys.stderr)
+            return 1
+        print("README function table matches the catalogue")
+        return 0
+
+    text = {"idl": gen_idl, "specs": gen_specs, "methods": gen_methods, "xcu": gen_xcu,
+            "readme-table": gen_readme_table}[opts.what](data)
+    if opts.out:
+        out = pathlib.Path(opts.out)
+        out.parent.mkdir(parents=True, exist_ok=True)
+        # Leave an unchanged file untouched so the build does not recompile for nothing.
+        if not out.exists() or out.read_text(encoding="utf-8") != text:
+            out.write_text(text, encoding="utf-8")
+    else:
+        sys.stdout.write(text)
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
