@@ -120,10 +120,8 @@ def xml_value(text, lang=True):
 
 
 def arg_help(arg):
-    text = arg["help"]
-    if "default" in arg:
-        text += " Optional."
-    return text
+    # Calc lists every `any` argument as optional, so the help says which ones are not.
+    return arg["help"] + (" Optional." if "default" in arg else " Required.")
 
 
 def gen_xcu(data):
