@@ -1,9 +1,12 @@
 #!/usr/bin/env python3
-"""Generate every artefact that describes the spreadsheet functions from idl/functions.toml.
+"""Generate every artefact that describes the spreadsheet functions from the catalogue:
+idl/addin.toml (the add-in) and idl/functions/*.toml (the functions, one file per family).
 
 One catalogue, several views, so the names, arguments and help cannot drift apart:
   idl            the UNO interface the add-in implements
-  cxx            C++ argument specs (UNO-free core) and the add-in's method glue
+  specs          C++ argument specs for the UNO-free core
+  bindings       the list of C++ binding functions, one per family file
+  methods        the add-in's method glue
   xcu            CalcAddIns configuration: display names, descriptions, argument help
   readme-table   the README's function reference (check-readme / update-readme keep it in step)
 """
@@ -21,13 +24,28 @@ IDL_KEYWORDS = {
     "short", "singleton", "string", "struct", "transient", "type", "typedef", "unsigned", "void",
 }
 KINDS = {"number", "gauge", "table"}
-README_BEGIN = "<!-- function-table:begin (generated from idl/functions.toml; do not edit) -->"
+README_BEGIN = "<!-- function-table:begin (generated from idl/functions/*.toml; do not edit) -->"
 README_END = "<!-- function-table:end -->"
 
 
-def load(path):
-    with open(path, "rb") as f:
+def load(idl_dir):
+    idl_dir = pathlib.Path(idl_dir)
+    with open(idl_dir / "addin.toml", "rb") as f:
         data = tomllib.load(f)
+    data["function"] = []
+    data["bindings"] = []
+    for path in sorted((idl_dir / "functions").glob("*.toml")):
+        with open(path, "rb") as f:
+            family = tomllib.load(f)
+        binding = family.get("binding")
+        if not binding or not binding.isidentifier():
+            sys.exit(f"catalogue: {path.name}: missing binding")
+        if binding in data["bindings"]:
+            sys.exit(f"catalogue: {path.name}: binding {binding} used twice")
+        data["bindings"].append(binding)
+        for fn in family.get("function", []):
+            fn["binding"] = binding
+            data["function"].append(fn)
     names = set()
     for fn in data["function"]:
         if fn["name"] in names:
@@ -60,7 +78,7 @@ def load(path):
 def gen_idl(data):
     a = data["addin"]
     mods = a["module"].split(".")
-    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+    out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
            "#include <com/sun/star/uno/XInterface.idl>", ""]
     out += [f"module {m} {{" for m in mods]
     out.append(f"interface {a['interface']} : com::sun::star::uno::XInterface")
@@ -79,7 +97,7 @@ def cxx_string(s):
 
 def gen_specs(data):
     """UNO-free argument specifications, one table indexed like the IDL methods."""
-    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+    out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
            "// Included by addin/core/catalogue.cpp.", "",
            f"const char kServiceName[] = {cxx_string(data['addin']['service'])};", ""]
     for fn in data["function"]:
@@ -99,9 +117,19 @@ def gen_specs(data):
     return "\n".join(out) + "\n"
 
 
+def gen_bindings(data):
+    """Declarations and list of the per-family binding functions (addin/functions/*.cpp)."""
+    out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
+           "// Included by addin/core/registry.cpp.", ""]
+    out += [f"std::vector<Implementation> {b}();" for b in data["bindings"]]
+    out += ["", "using Binding = std::vector<Implementation> (*)();",
+            "const Binding kBindings[] = {" + ", ".join(data["bindings"]) + "};"]
+    return "\n".join(out) + "\n"
+
+
 def gen_methods(data):
     """Method declarations for the add-in class body: each forwards to one dispatcher."""
-    out = ["// Generated from idl/functions.toml by tools/catalogue.py: do not edit.",
+    out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
            "// Included inside the add-in class body (addin/uno/component.cpp).", ""]
     for index, fn in enumerate(data["function"]):
         params = ", ".join(f"const css::uno::Any& {arg['name']}" for arg in fn["args"])
@@ -127,7 +155,7 @@ def arg_help(arg):
 def gen_xcu(data):
     a = data["addin"]
     out = ['<?xml version="1.0" encoding="UTF-8"?>',
-           "<!-- Generated from idl/functions.toml by tools/catalogue.py: do not edit. -->",
+           "<!-- Generated from idl/functions/*.toml by tools/catalogue.py: do not edit. -->",
            '<oor:component-data xmlns:oor="http://openoffice.org/2001/registry" '
            'xmlns:xs="http://www.w3.org/2001/XMLSchema" oor:name="CalcAddIns" oor:package="org.openoffice.Office">',
            '  <node oor:name="AddInInfo">',
@@ -187,14 +215,15 @@ def readme_parts(readme_text):
 
 def main():
     ap = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
-    ap.add_argument("what", choices=["idl", "specs", "methods", "xcu", "readme-table", "check-readme", "update-readme"])
-    ap.add_argument("--catalogue", default=str(pathlib.Path(__file__).resolve().parent.parent / "idl" / "functions.toml"))
+    ap.add_argument("what", choices=["idl", "specs", "bindings", "methods", "xcu", "readme-table", "check-readme",
+                                     "update-readme"])
+    ap.add_argument("--idl-dir", default=str(pathlib.Path(__file__).resolve().parent.parent / "idl"))
     ap.add_argument("--out", help="output file (default: stdout); README path for *-readme")
     opts = ap.parse_args()
-    data = load(opts.catalogue)
+    data = load(opts.idl_dir)
 
     if opts.what in ("check-readme", "update-readme"):
-        path = pathlib.Path(opts.out or pathlib.Path(opts.catalogue).resolve().parent.parent / "README.md")
+        path = pathlib.Path(opts.out or pathlib.Path(opts.idl_dir).resolve().parent / "README.md")
         text = path.read_text(encoding="utf-8")
         head, tail = readme_parts(text)
         wanted = head + gen_readme_table(data).rstrip("\n") + tail
@@ -202,13 +231,13 @@ def main():
             path.write_text(wanted, encoding="utf-8")
             return 0
         if wanted != text:
-            print(f"{path}: function table differs from idl/functions.toml; run "
+            print(f"{path}: function table differs from idl/functions/*.toml; run "
                   "'python3 tools/catalogue.py update-readme'", file=sys.stderr)
             return 1
         print("README function table matches the catalogue")
         return 0
 
-    text = {"idl": gen_idl, "specs": gen_specs, "methods": gen_methods, "xcu": gen_xcu,
+    text = {"idl": gen_idl, "specs": gen_specs, "bindings": gen_bindings, "methods": gen_methods, "xcu": gen_xcu,
             "readme-table": gen_readme_table}[opts.what](data)
     if opts.out:
         out = pathlib.Path(opts.out)

@@ -1,4 +1,4 @@
-// The argument specifications of every function, generated from idl/functions.toml.
+// The argument specifications of every function, generated from idl/functions/*.toml.
 // Indexed like the methods of the UNO interface.
 #pragma once
 

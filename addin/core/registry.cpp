@@ -10,10 +10,13 @@ Implementation numeric(const char* name, ElementFn fn, double cost) {
     return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost}; }};
 }
 
+// Declares each family's binding function and lists them (kBindings).
+#include "bindings.inc"
+
 std::vector<Implementation> contributed_implementations() {
     std::vector<Implementation> all;
-    for (auto&& list : {loop_functions()})
-        for (auto& impl : list) all.push_back(impl);
+    for (Binding binding : kBindings)
+        for (auto& impl : binding()) all.push_back(impl);
     return all;
 }
 

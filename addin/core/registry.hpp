@@ -36,7 +36,4 @@ const std::vector<Implementation>& implementations();
 // Everything the functions/*.cpp files contribute, in no particular order.
 std::vector<Implementation> contributed_implementations();
 
-// Lists contributed by each functions/*.cpp file.
-std::vector<Implementation> loop_functions();
-
 }  // namespace coilwright::sheet

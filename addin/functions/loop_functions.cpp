@@ -5,7 +5,7 @@
 namespace coilwright::sheet {
 
 std::vector<Implementation> loop_functions() {
-    // Argument order as in idl/functions.toml: radius, turns, current, z, r.
+    // Argument order as in idl/functions/10_loop.toml: radius, turns, current, z, r.
     auto field = [](const double* a) { return loop_field({a[0], a[1], a[2]}, a[3], a[4]); };
     return {
         numeric("LOOP_BZ", [field](const double* a) { return field(a).bz; }),

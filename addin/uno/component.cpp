@@ -1,4 +1,4 @@
-// The UNO component Calc instantiates: the interface generated from idl/functions.toml plus
+// The UNO component Calc instantiates: the interface generated from idl/functions/*.toml plus
 // XServiceName and XServiceInfo. Every method forwards to dispatch(), which converts the
 // arguments, runs the UNO-free evaluation and maps failures to exceptions Calc shows as
 // error cells (IllegalArgumentException: Err:502, NoConvergenceException: Err:523).
