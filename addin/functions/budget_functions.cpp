@@ -20,6 +20,8 @@ std::vector<Implementation> budget_functions() {
         numeric("COIL_POWER", [](const double* a) { return coil_power(a[0], a[1]); }),
         numeric("COIL_CURRENT_DENSITY", [](const double* a) { return coil_current_density(a[0], a[1]); }),
         numeric("COIL_COOLING_AREA", [](const double* a) { return coil_cooling_area(a[0], a[1], a[2]); }),
+        numeric("COIL_COOLING_AREA_RECT",
+                [](const double* a) { return coil_cooling_area_rect(a[0], a[1], a[2], a[3]); }),
         numeric("COIL_TEMPERATURE_RISE", [](const double* a) { return coil_temperature_rise(a[0], a[1], a[2]); }),
         numeric("COIL_HOT_TEMPERATURE", [at_current](const double* a) { return at_current(a).temperature; }),
         numeric("COIL_HOT_RESISTANCE", [at_current](const double* a) { return at_current(a).resistance; }),

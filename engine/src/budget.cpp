@@ -64,6 +64,17 @@ double coil_cooling_area(double inner_radius, double outer_radius, double length
     return check::finite_result(2.0 * kPi * outer_radius * length + ends, "cooling area");
 }
 
+double coil_cooling_area_rect(double inner_width, double inner_height, double build, double length) {
+    check::positive(inner_width, "inner width");
+    check::positive(inner_height, "inner height");
+    check::positive(build, "build");
+    check::non_negative(length, "length");
+    const double perimeter = 2.0 * (inner_width + inner_height);
+    const double outer = (perimeter + 2.0 * kPi * build) * length;
+    const double ends = 2.0 * (perimeter * build + kPi * build * build);
+    return check::finite_result(outer + ends, "cooling area");
+}
+
 double coil_temperature_rise(double power, double area, double h) {
     check::non_negative(power, "power");
     check::positive(area, "cooling area");

@@ -29,6 +29,11 @@ TEST(Budget, CoolingAreaAndRise) {
     // Outer cylinder 2 pi 0.1 * 0.05 plus two annuli pi (0.1^2 - 0.08^2) each.
     EXPECT_LT(rel(coil_cooling_area(0.08, 0.1, 0.05), 2 * kPi * 0.1 * 0.05 + 2 * kPi * (0.01 - 0.0064)), 1e-15);
     EXPECT_EQ(coil_temperature_rise(20.0, 0.5, 10.0), 4.0);
+    // Rectangular former 1 m x 0.5 m, 10 mm build, 20 mm long: outer (3 + 2 pi 0.01) 0.02,
+    // ends 2 (3 * 0.01 + pi 0.01^2). The end face is the integral over the build of the turn
+    // length 2 (w + h) + 2 pi t (WINDING_MEAN_TURN_RECT's model).
+    EXPECT_LT(rel(coil_cooling_area_rect(1.0, 0.5, 0.01, 0.02), (3 + 2 * kPi * 0.01) * 0.02 + 2 * (0.03 + kPi * 1e-4)), 1e-15);
+    EXPECT_THROW(coil_cooling_area_rect(1.0, 0.5, 0.0, 0.02), DomainError);
 }
 
 TEST(Budget, HotStateAtCurrentMatchesAHandCalculation) {

@@ -27,6 +27,12 @@ double coil_current_density(double current, double diameter);
 // 2 pi (ro^2 - ri^2); the bore is left out (little air moves through it). m^2.
 double coil_cooling_area(double inner_radius, double outer_radius, double length);
 
+// Cooling surface of a winding of build b and axial length l on a sharp-cornered rectangular
+// former w x h, with the outer corners rounded at radius b (the turn model of
+// winding_mean_turn_rect): outer surface (2 (w + h) + 2 pi b) l plus both end faces
+// 2 (2 (w + h) b + pi b^2); the inside is left out. m^2.
+double coil_cooling_area_rect(double inner_width, double inner_height, double build, double length);
+
 // Steady rise (K) for power P (W) through area A (m^2) at coefficient h (W/(m^2 K)): P / (h A).
 double coil_temperature_rise(double power, double area, double h);
 
