@@ -221,4 +221,8 @@ TEST(RectPair, SpacingZeroesTheSecondDerivativeAndTendsToTheWireLimit) {
     EXPECT_NEAR(rect_pair_spacing(1e4, 1.0), 1 / std::sqrt(3.0), 1e-4);
     EXPECT_NEAR(rect_pair_spacing(1.0, 1e4), 1 / std::sqrt(3.0), 1e-4);
     EXPECT_GT(rect_pair_spacing(1.0, 2.0), rect_pair_spacing(1.0, 1e3));  // the maximum lies between
+    // Just inside and beyond the aspect ratio (1e4) where the limit is returned directly: no step.
+    EXPECT_NEAR(rect_pair_spacing(1.0, 0.99e-4) / 0.99e-4, 1 / std::sqrt(3.0), 2e-16 * 4);
+    EXPECT_NEAR(rect_pair_spacing(1.0, 1.01e-4) / 1.01e-4, 1 / std::sqrt(3.0), 2e-16 * 4);
+    for (double r : {1e-10, 1e-100, 1e-300}) EXPECT_EQ(rect_pair_spacing(1.0, r), r / std::sqrt(3.0)) << r;
 }

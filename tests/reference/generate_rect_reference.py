@@ -129,7 +129,7 @@ def spacing(w, h):
         w, h = mp.mpf(w), mp.mpf(h)
         d2 = lambda z: mp.diff(lambda t: onaxis_f(t, w, h), z, 2)
         top = max(w, h)
-        grid = [top * k / 4000 for k in range(1, 4000)]
+        grid = [min(w, h) * k / 1000 for k in range(1, 2000)]  # the inflection lies below min(w, h)
         prev = d2(grid[0])
         for lo, hi in zip(grid, grid[1:]):
             cur = d2(hi)
@@ -169,7 +169,8 @@ def main():
     print(f"wrote {len(rows)} rows to rect_field.csv")
 
     srows = []
-    for w, h in [(1, 1), (1, 0.5), (1, 2), (1, 0.8), (2, 3), (1, 0.1), (1, 10), (1, 0.01), (1, 1e-3), (0.35, 0.35)]:
+    for w, h in [(1, 1), (1, 0.5), (1, 2), (1, 0.8), (2, 3), (1, 0.1), (1, 10), (1, 0.01), (1, 1e-3), (0.35, 0.35),
+                 (1, 2e-4)]:
         srows.append([repr(float(w)), repr(float(h)), mp.nstr(spacing(w, h), 25, min_fixed=1, max_fixed=0)])
     with open(here / "rect_pair_spacing.csv", "w", newline="") as f:
         f.write("# Spacing of two identical rectangles with zero d2Bz/dz2 at the centre: mpmath findroot on the\n")
