@@ -25,7 +25,7 @@ def check_family(test, family, expected_names):
         good = formula(name, case["good"])
         cell = test.formula("A1", good)
         test.assertEqual(cell.getError(), 0, f"{good} gave Err:{cell.getError()}")
-        calls = [case["bad_calls"][i] for i in range(len(case["bad_calls"]))]
+        calls = [list(call) for call in case["bad_calls"]]
         for index, substitutes in case["bad"].items():
             for bad in substitutes:
                 args = list(case["good"])
