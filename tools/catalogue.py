@@ -23,7 +23,8 @@ IDL_KEYWORDS = {
     "property", "published", "raises", "readonly", "removable", "sequence", "service",
     "short", "singleton", "string", "struct", "transient", "type", "typedef", "unsigned", "void",
 }
-KINDS = {"number", "gauge", "table"}
+KINDS = {"number", "gauge", "choice", "table"}
+CHOICE_KEYS = ("choices", "values", "aliases", "accept_numbers")
 README_BEGIN = "<!-- function-table:begin (generated from idl/functions/*.toml; do not edit) -->"
 README_END = "<!-- function-table:end -->"
 
@@ -59,6 +60,8 @@ def load(idl_dir):
                 sys.exit(f"catalogue: {fn['name']}.{arg['name']}: unknown kind {kind}")
             if arg["name"] in IDL_KEYWORDS or not arg["name"].isidentifier():
                 sys.exit(f"catalogue: {fn['name']}: bad argument name {arg['name']}")
+            if "_" in arg["name"]:  # unoidl-write rejects it ("illegal identifier")
+                sys.exit(f"catalogue: {fn['name']}: argument {arg['name']}: UNO IDL allows no underscore here; use camelCase")
             if arg["name"] in arg_names:
                 sys.exit(f"catalogue: {fn['name']}: duplicate argument {arg['name']}")
             arg_names.add(arg["name"])
@@ -69,10 +72,56 @@ def load(idl_dir):
             for key in ("unit", "help"):
                 if not arg.get(key):
                     sys.exit(f"catalogue: {fn['name']}.{arg['name']}: missing {key}")
+            check_choice(fn["name"], arg)
         for key in ("group", "returns", "summary", "accuracy"):
             if not fn.get(key):
                 sys.exit(f"catalogue: {fn['name']}: missing {key}")
     return data
+
+
+def check_choice(fn_name, arg):
+    """A "choice" argument: text from a fixed list (case-insensitive), converted to a number
+    before broadcasting. choices = primary texts; values = their numbers (default 0, 1, ...);
+    aliases = {alias = primary}; accept_numbers = a number equal to a value is accepted too;
+    default = one of the texts. Fills arg["choice_table"]: [(lower text, value, primary)]."""
+    where = f"catalogue: {fn_name}.{arg['name']}"
+    if arg["kind"] != "choice":
+        for key in CHOICE_KEYS:
+            if key in arg:
+                sys.exit(f"{where}: {key} is only for kind = \"choice\"")
+        return
+    choices = arg.get("choices")
+    if not choices or not all(isinstance(c, str) and c.strip() for c in choices):
+        sys.exit(f"{where}: choices must be a non-empty list of texts")
+    values = arg.get("values", list(range(len(choices))))
+    if len(values) != len(choices) or not all(isinstance(v, (int, float)) for v in values):
+        sys.exit(f"{where}: values must be one number per choice")
+    table = [(c.lower(), float(v), True) for c, v in zip(choices, values)]
+    by_text = {c.lower(): float(v) for c, v in zip(choices, values)}
+    for alias, target in arg.get("aliases", {}).items():
+        if target.lower() not in by_text:
+            sys.exit(f"{where}: alias {alias} names no choice")
+        table.append((alias.lower(), by_text[target.lower()], False))
+    texts = [t for t, _, _ in table]
+    if len(set(texts)) != len(texts):
+        sys.exit(f"{where}: a choice or alias appears twice (case is ignored)")
+    if "default" in arg:
+        default = arg["default"]
+        if not isinstance(default, str) or default.lower() not in texts:
+            sys.exit(f"{where}: default must be one of the choices")
+        arg["default_text"] = default.lower()
+        arg["default"] = default
+    arg["choice_table"] = table
+
+
+def choice_help(arg):
+    if arg["kind"] != "choice":
+        return ""
+    aliases = list(arg.get("aliases", {}))
+    text = " Text, one of: " + ", ".join(arg["choices"])
+    if aliases:
+        text += " (also " + ", ".join(aliases) + ")"
+    return text + "; case is ignored."
 
 
 def gen_idl(data):
@@ -104,8 +153,19 @@ def gen_specs(data):
         rows = []
         for arg in fn["args"]:
             optional = "true" if "default" in arg else "false"
-            default = repr(float(arg.get("default", 0.0)))
-            rows.append(f"    {{{cxx_string(arg['name'])}, ArgKind::{arg['kind'].capitalize()}, {optional}, {default}}},")
+            if arg["kind"] == "choice":
+                table = f"kChoices_{fn['name']}_{arg['name']}"
+                out.append(f"const Choice {table}[] = {{")
+                out += [f"    {{{cxx_string(t)}, {v!r}, {'true' if p else 'false'}}}," for t, v, p in arg["choice_table"]]
+                out.append("};")
+                default_text = cxx_string(arg["default_text"]) if "default_text" in arg else "nullptr"
+                accepts = "true" if arg.get("accept_numbers") else "false"
+                extra = f"{table}, {len(arg['choice_table'])}, {accepts}, {default_text}"
+                default = "0.0"
+            else:
+                extra = "nullptr, 0, false, nullptr"
+                default = repr(float(arg.get("default", 0.0)))
+            rows.append(f"    {{{cxx_string(arg['name'])}, ArgKind::{arg['kind'].capitalize()}, {optional}, {default}, {extra}}},")
         out.append(f"const ArgSpec kArgs_{fn['name']}[] = {{")
         out += rows
         out.append("};")
@@ -149,7 +209,7 @@ def xml_value(text, lang=True):
 
 def arg_help(arg):
     # Calc lists every `any` argument as optional, so the help says which ones are not.
-    return arg["help"] + (" Optional." if "default" in arg else " Required.")
+    return arg["help"] + choice_help(arg) + (" Optional." if "default" in arg else " Required.")
 
 
 def gen_xcu(data):
@@ -196,7 +256,8 @@ def gen_readme_table(data):
         for arg in fn["args"]:
             text = f"{arg['name']} [{arg['unit']}]"
             if "default" in arg:
-                text = f"[{arg['name']} [{arg['unit']}] = {arg['default']:g}]"
+                default = arg["default"] if isinstance(arg["default"], str) else f"{arg['default']:g}"
+                text = f"[{arg['name']} [{arg['unit']}] = {default}]"
             args.append(text)
         out.append(f"| `{fn['name']}` | {md('; '.join(args))} | {md(fn['summary'])} ({md(fn['returns'])}) "
                    f"| {md(fn['accuracy'])} |")

@@ -4,18 +4,39 @@
 
 #include <cstddef>
 #include <span>
+#include <string>
 #include <string_view>
 
 namespace coilwright::sheet {
 
-enum class ArgKind { Number, Gauge, Table };
+enum class ArgKind { Number, Gauge, Choice, Table };
+
+// One accepted text of a "choice" argument (lower case) and the number it converts to.
+struct Choice {
+    const char* text;
+    double value;
+    bool primary;  // false for an alias
+};
 
 struct ArgSpec {
     const char* name;
     ArgKind kind;
     bool optional;
     double default_value;
+    // Choice arguments only: the accepted texts, whether a number equal to one of their
+    // values is accepted too, and the default as text.
+    const Choice* choices = nullptr;
+    std::size_t choice_count = 0;
+    bool accepts_numbers = false;
+    const char* default_text = nullptr;
 };
+
+// A choice argument's value for a text (trimmed, case-insensitive) or a number; false when it
+// names none of the choices.
+bool choice_from_text(const ArgSpec& spec, std::string_view text, double& value);
+bool choice_from_number(const ArgSpec& spec, double number, double& value);
+// "copper, aluminium" (the primary texts), for messages.
+std::string choice_list(const ArgSpec& spec);
 
 struct FunctionSpec {
     const char* name;

@@ -24,6 +24,11 @@ struct ElementOutcome {
 bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& message) {
     switch (cell.kind) {
         case CellKind::Number:
+            if (spec.kind == ArgKind::Choice) {
+                if (choice_from_number(spec, cell.number, out)) return true;
+                message = std::string(spec.name) + " must be one of: " + choice_list(spec);
+                return false;
+            }
             out = cell.number;
             return true;
         case CellKind::Empty:
@@ -38,6 +43,11 @@ bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& 
                     message = std::string(spec.name) + ": " + e.what();
                     return false;
                 }
+            }
+            if (spec.kind == ArgKind::Choice) {
+                if (choice_from_text(spec, cell.text, out)) return true;
+                message = std::string(spec.name) + " \"" + cell.text + "\" is not one of: " + choice_list(spec);
+                return false;
             }
             message = std::string(spec.name) + " is text where a number is needed";
             return false;
@@ -99,7 +109,8 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
                 tables.push_back(arg);
                 continue;
             }
-            defaults.push_back(Arg::number(as.default_value));
+            defaults.push_back(as.kind == ArgKind::Choice ? Arg::scalar(Cell::of_text(as.default_text))
+                                                          : Arg::number(as.default_value));
             arg = &defaults.back();
         }
         if (as.kind == ArgKind::Table) {
