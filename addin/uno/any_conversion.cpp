@@ -21,6 +21,8 @@ sheet::Cell to_cell(const Any& v) {
         case TypeClass_STRING: {
             rtl::OUString s;
             v >>= s;
+            // Calc passes blank cells of a range as empty strings (ScRangeToSequence::FillMixedArray).
+            if (s.isEmpty()) return {};
             return sheet::Cell::of_text(rtl::OUStringToOString(s, RTL_TEXTENCODING_UTF8).getStr());
         }
         case TypeClass_DOUBLE:
