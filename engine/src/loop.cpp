@@ -33,9 +33,11 @@ namespace detail {
 
 FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
     const double alpha = std::hypot(one_minus_r, z_n);
-    if (alpha == 0.0) throw SingularPointError("the point lies on the current filament");
     const double beta = std::hypot(1.0 + r_n, z_n);
     const double kc = alpha / beta;
+    // kc = 0 also when alpha / beta underflows (a point within 1e-323 radii of the wire, e.g.
+    // radius 2e23 m, z = 1e-300 m, r = radius): the Gauss iteration from kc = 0 never ends.
+    if (!(kc > 0.0)) throw SingularPointError("the point lies on the current filament");
     const double k2 = (4.0 * r_n / beta) / beta;
 
     // State after the first Gauss step of cel(kc, kc^2, 1, 0) [index 0] and of
@@ -62,7 +64,10 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     check::finite(z, "z");
     check::non_negative(r, "r");
     const double a = loop.radius;
-    const FieldRZ unit = detail::loop_field_normalized(z / a, r / a, (a - r) / a);
+    const double z_n = z / a, r_n = r / a;
+    if (!std::isfinite(z_n) || !std::isfinite(r_n))
+        throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
+    const FieldRZ unit = detail::loop_field_normalized(z_n, r_n, (a - r) / a);
     const double scale = kMu0 * loop.turns * loop.current / a;
     const FieldRZ f = scale * unit;
     check::finite_result(f.bz, "Bz");

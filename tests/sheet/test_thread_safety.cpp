@@ -3,9 +3,10 @@
 // Run under the sanitizer build (ASan, UBSan) in tools/test.sh; tools/soak.sh adds ThreadSanitizer.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <atomic>
+#include <bit>
 #include <cstdint>
-#include <cstring>
 #include <thread>
 #include <vector>
 
@@ -63,8 +64,9 @@ std::vector<Call> make_calls() {
 
 bool same(const CallResult& a, const CallResult& b) {
     return a.error == b.error && a.message == b.message && a.is_array == b.is_array && a.rows == b.rows &&
-           a.cols == b.cols && a.errors == b.errors && a.values.size() == b.values.size() &&
-           std::memcmp(a.values.data(), b.values.data(), a.values.size() * sizeof(double)) == 0;
+           a.cols == b.cols && a.errors == b.errors &&
+           std::equal(a.values.begin(), a.values.end(), b.values.begin(), b.values.end(),
+                      [](double x, double y) { return std::bit_cast<std::uint64_t>(x) == std::bit_cast<std::uint64_t>(y); });
 }
 
 }  // namespace
