@@ -15,6 +15,7 @@
 #include "coilwright/loop.hpp"
 
 #include <cmath>
+#include <limits>
 
 #include "coilwright/bulirsch_cel.hpp"
 #include "coilwright/checks.hpp"
@@ -69,6 +70,10 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
         throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
     const FieldRZ unit = detail::loop_field_normalized(z_n, r_n, (a - r) / a);
     const double scale = kMu0 * loop.turns * loop.current / a;
+    // A prefactor in the subnormal range (radius 1e308 m, say) has lost its digits before the
+    // field is formed; Br would come out as a silent 0 and Bz as a subnormal.
+    if (scale != 0.0 && std::fabs(scale) < std::numeric_limits<double>::min())
+        throw DomainError("the field underflows below 2.2e-308 T: the radius is too large for the ampere-turns");
     const FieldRZ f = scale * unit;
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");

@@ -42,6 +42,14 @@ TEST(LoopExtremes, PointsBeyondDoubleRangeInRadiiAreErrors) {
     EXPECT_THROW(loop_field({1.0, 1, 1}, 1e-300, 1.0), SingularPointError);
 }
 
+TEST(LoopExtremes, FieldScaleThatUnderflowsIsAnError) {
+    // mu0 N I / a = 2.5e-313 for a = 1e308 m: Br used to come out as a silent 0.
+    EXPECT_THROW(loop_field({1e308, 10, 2}, 0.05, 0.02), DomainError);
+    EXPECT_THROW(loop_field({1e308, 10, 2}, 0, 0), DomainError);
+    // No current: an exact zero, not an error.
+    EXPECT_EQ(loop_field({1e308, 10, 0}, 0.05, 0.02).bz, 0.0);
+}
+
 TEST(LoopExtremes, CelIterationIsBoundedOutsideItsDomain) {
     // kc = 0 is outside cel's domain; the loop must stop with an error instead of spinning.
     EXPECT_THROW(cel(0.0, 1.0, 1.0, 1.0), ConvergenceError);
