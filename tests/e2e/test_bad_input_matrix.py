@@ -29,6 +29,7 @@ RESULT_VALUE, RESULT_STRING, RESULT_ERROR = 1, 2, 4
 
 ERROR_CELL = "$AMJ$1"  # =1/0 on every sheet: the error a bad argument refers to
 ERROR_CELL_NA = "$AMJ$2"  # =NA()
+BLANK_CELL = "$AMJ$3"  # never written
 GENERIC_BAD = [
     ("text", '"abc"'),
     ("number as text", '"1"'),
@@ -219,6 +220,15 @@ class BadInputMatrix(CalcTestCase):
             for c in range(3):
                 got = self.outcome(sheet.getCellByPosition(column + c, 0))
                 self.assertEqual(got[0], "error", f"{name}: mismatched shapes gave {got} in element {c}")
+        # A reference to a single blank cell is passed as 0 by Calc (as to its own functions):
+        # the same outcome as typing 0, whatever that is.
+        for i in numeric:
+            for col, value in ((3, BLANK_CELL), (4, "0")):
+                args = list(good)
+                args[i] = value
+                sheet.getCellByPosition(col, 2).setFormula(call(name, args))
+            blank, zero = (self.outcome(sheet.getCellByPosition(col, 2)) for col in (3, 4))
+            self.assertEqual(blank, zero, f"{name}: {fn['args'][i]['name']} as a blank cell and as 0")
         # Each numeric argument as a column holding the valid value, a blank, text and an error.
         column = 6
         for i in numeric:
