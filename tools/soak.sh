@@ -18,10 +18,13 @@ for part in $parts; do
     ;;
   valgrind)
     tools/build.sh
+    # Valgrind computes long double in 64 bits, so Boost.Math's references (which promote to
+    # long double) lose digits under it: the one test checking cel against them to 4e-16 is skipped.
     for t in engine_tests sheet_tests; do
       bin=$(find build/tests -name "$t" -type f | head -1)
       valgrind --quiet --leak-check=full --show-leak-kinds=definite,indirect,possible \
-        --errors-for-leak-kinds=definite,indirect,possible --error-exitcode=1 "$bin" --gtest_brief=1
+        --errors-for-leak-kinds=definite,indirect,possible --error-exitcode=1 "$bin" --gtest_brief=1 \
+        --gtest_filter=-BulirschCel.FirstAndSecondKindMatchBoost
       echo "valgrind $t: no leaks, no invalid accesses"
     done
     ;;
