@@ -2,6 +2,7 @@
 
 #include <cmath>
 #include <exception>
+#include <limits>
 #include <string>
 #include <vector>
 
@@ -27,6 +28,12 @@ bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& 
             if (spec.kind == ArgKind::Choice) {
                 if (choice_from_number(spec, cell.number, out)) return true;
                 message = std::string(spec.name) + " must be one of: " + choice_list(spec);
+                return false;
+            }
+            // A subnormal value (below 2.2e-308, reachable only through an expression) carries
+            // fewer digits than any result promises; no argument has a sensible value there.
+            if (cell.number != 0.0 && std::fabs(cell.number) < std::numeric_limits<double>::min()) {
+                message = std::string(spec.name) + " is a subnormal number (magnitude below 2.2e-308)";
                 return false;
             }
             out = cell.number;
@@ -62,6 +69,10 @@ ElementOutcome run(const ElementFn& fn, const double* numbers) {
         if (!std::isfinite(out.value)) {
             out.error = CellError::IllegalArgument;
             out.message = "the result is not a finite number";
+        } else if (out.value != 0.0 && std::fabs(out.value) < std::numeric_limits<double>::min()) {
+            // Underflow into the subnormal range loses relative precision: an error, like overflow.
+            out.error = CellError::IllegalArgument;
+            out.message = "the result underflows (magnitude below 2.2e-308)";
         }
     } catch (const ConvergenceError& e) {
         out.error = CellError::NoConvergence;

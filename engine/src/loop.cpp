@@ -15,6 +15,7 @@
 #include "coilwright/loop.hpp"
 
 #include <cmath>
+#include <limits>
 
 #include "coilwright/bulirsch_cel.hpp"
 #include "coilwright/checks.hpp"
@@ -33,9 +34,11 @@ namespace detail {
 
 FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
     const double alpha = std::hypot(one_minus_r, z_n);
-    if (alpha == 0.0) throw SingularPointError("the point lies on the current filament");
     const double beta = std::hypot(1.0 + r_n, z_n);
     const double kc = alpha / beta;
+    // kc = 0 also when alpha / beta underflows (a point within 1e-323 radii of the wire, e.g.
+    // radius 2e23 m, z = 1e-300 m, r = radius): the Gauss iteration from kc = 0 never ends.
+    if (!(kc > 0.0)) throw SingularPointError("the point lies on the current filament");
     const double k2 = (4.0 * r_n / beta) / beta;
 
     // State after the first Gauss step of cel(kc, kc^2, 1, 0) [index 0] and of
@@ -62,8 +65,15 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     check::finite(z, "z");
     check::non_negative(r, "r");
     const double a = loop.radius;
-    const FieldRZ unit = detail::loop_field_normalized(z / a, r / a, (a - r) / a);
+    const double z_n = z / a, r_n = r / a;
+    if (!std::isfinite(z_n) || !std::isfinite(r_n))
+        throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
+    const FieldRZ unit = detail::loop_field_normalized(z_n, r_n, (a - r) / a);
     const double scale = kMu0 * loop.turns * loop.current / a;
+    // A prefactor in the subnormal range (radius 1e308 m, say) has lost its digits before the
+    // field is formed; Br would come out as a silent 0 and Bz as a subnormal.
+    if (scale != 0.0 && std::fabs(scale) < std::numeric_limits<double>::min())
+        throw DomainError("the field underflows below 2.2e-308 T: the radius is too large for the ampere-turns");
     const FieldRZ f = scale * unit;
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");

@@ -17,12 +17,17 @@
 #include <cstddef>
 
 #include "coilwright/constants.hpp"
+#include "coilwright/errors.hpp"
 
 namespace coilwright {
 
 // Relative gap between successive arithmetic and geometric means at which the loop stops.
 // The iteration converges quadratically, so the error left is of the order of its square.
 inline constexpr double kCelTolerance = 1e-9;
+
+// From the smallest positive double the means agree to kCelTolerance within 15 steps; a loop
+// that runs longer was started outside the domain (qc = 0 or NaN) and must not spin forever.
+inline constexpr int kCelMaxSteps = 64;
 
 // The loop state for N integrands that share kc and p (a and b differ). State names follow
 // Bulirsch's paper: qc the current modulus, em the running mean, e = qc * em.
@@ -37,7 +42,8 @@ struct CelLoop {
 
     // Runs the remaining Gauss steps and returns the N integrals.
     std::array<double, N> finish() {
-        while (std::fabs(g - qc) > g * kCelTolerance) {
+        for (int steps = 0; std::fabs(g - qc) > g * kCelTolerance; ++steps) {
+            if (steps == kCelMaxSteps) throw ConvergenceError("elliptic integral: the Gauss iteration did not converge");
             qc = 2.0 * std::sqrt(e);
             e = qc * em;
             step();

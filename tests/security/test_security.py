@@ -1,0 +1,163 @@
+"""What can be checked of the security promises, on the built artefacts.
+
+The add-in touches no files, network or environment, starts no process and evaluates no user
+string as code; the workbooks carry no macros; the extension names its version and license.
+"""
+import os
+import pathlib
+import re
+import subprocess
+import unittest
+import xml.etree.ElementTree as ET
+import zipfile
+
+SOURCE = pathlib.Path(os.environ.get("COILWRIGHT_SOURCE_DIR", pathlib.Path(__file__).resolve().parents[2]))
+OXT = pathlib.Path(os.environ.get("COILWRIGHT_OXT", SOURCE / "build" / "coilwright.oxt"))
+VERSION = os.environ.get("COILWRIGHT_VERSION", "")
+LIBRARY = "coilwright.uno.so"
+
+# Imports that would let the library reach files, the network, the environment, other
+# processes or code loaded at run time (C library and LibreOffice's OS layer).
+FORBIDDEN_IMPORT = re.compile(
+    r"^(open|open64|openat|openat64|creat|creat64|fopen|fopen64|freopen|fdopen|tmpfile|mkstemp|mkdtemp|"
+    r"read|write|pread|pwrite|readv|writev|sendfile|unlink|unlinkat|remove|rename|renameat|mkdir|rmdir|"
+    r"opendir|readdir|scandir|chdir|chmod|chown|truncate|ftruncate|link|symlink|mmap|mmap64|"
+    r"stat|stat64|lstat|fstat|fstatat|__xstat|__xstat64|access|faccessat|realpath|"
+    r"socket|socketpair|connect|bind|listen|accept|accept4|send|sendto|sendmsg|recv|recvfrom|recvmsg|"
+    r"getaddrinfo|gethostbyname|gethostbyname_r|getnameinfo|inet_\w+|"
+    r"system|popen|fork|vfork|clone|execl|execlp|execle|execv|execvp|execvpe|execve|fexecve|"
+    r"posix_spawn\w*|kill|ptrace|dlopen|dlmopen|dlsym|dlvsym|"
+    r"getenv|secure_getenv|__secure_getenv|setenv|putenv|unsetenv|clearenv|environ|"
+    r"osl_\w+|rtl_bootstrap\w*|rtl_getAppCommandArg\w*)$")
+# LibreOffice OS-layer functions that are only locks and counters.
+ALLOWED_OSL = re.compile(r"^osl_(acquireMutex|releaseMutex|tryToAcquireMutex|createMutex|destroyMutex|"
+                         r"getGlobalMutex|incrementInterlockedCount|decrementInterlockedCount)$")
+ALLOWED_LIBRARIES = {"libuno_cppuhelpergcc3.so.3", "libuno_cppu.so.3", "libuno_sal.so.3", "libstdc++.so.6",
+                     "libm.so.6", "libgcc_s.so.1", "libc.so.6"}
+OXT_CONTENT = {"META-INF/manifest.xml", "description.xml", "description-en.txt", "LICENSE.txt",
+               "coilwright.components", "coilwright.rdb", "CalcAddIns.xcu", LIBRARY}
+DESCRIPTION_NS = {"d": "http://openoffice.org/extensions/description/2006",
+                  "xlink": "http://www.w3.org/1999/xlink"}
+
+
+def extracted_library(tmp):
+    with zipfile.ZipFile(OXT) as z:
+        return pathlib.Path(z.extract(LIBRARY, tmp))
+
+
+def tool(*cmd):
+    return subprocess.run(cmd, check=True, capture_output=True, text=True).stdout
+
+
+class AddinLibrary(unittest.TestCase):
+    @classmethod
+    def setUpClass(cls):
+        import tempfile
+        cls.tmp = tempfile.TemporaryDirectory()
+        cls.library = extracted_library(cls.tmp.name)
+
+    @classmethod
+    def tearDownClass(cls):
+        cls.tmp.cleanup()
+
+    def test_imports_no_file_network_environment_process_or_loader_functions(self):
+        imports = [line.split()[-1].split("@")[0]
+                   for line in tool("nm", "-D", "--undefined-only", str(self.library)).splitlines() if line.strip()]
+        self.assertGreater(len(imports), 10, "nm found no imports: wrong file?")
+        bad = [s for s in imports if FORBIDDEN_IMPORT.match(s) and not ALLOWED_OSL.match(s)]
+        self.assertEqual(bad, [], "the add-in imports functions that reach outside the calculation")
+        print(f"\n{len(imports)} imports, none for files, network, environment, processes or loading code")
+
+    def test_links_only_the_cxx_runtime_and_uno(self):
+        needed = set(re.findall(r"\(NEEDED\)\s+Shared library: \[([^\]]+)\]", tool("readelf", "-d", str(self.library))))
+        self.assertTrue(needed, "readelf found no NEEDED entries")
+        self.assertLessEqual(needed, ALLOWED_LIBRARIES, f"unexpected libraries: {sorted(needed - ALLOWED_LIBRARIES)}")
+
+    def test_exports_only_the_component_constructor(self):
+        exported = {line.split()[-1].split("@")[0]
+                    for line in tool("nm", "-D", "--defined-only", str(self.library)).splitlines()
+                    if line.split()[-2] in ("T", "W", "D", "B", "V", "i")}
+        exported -= {"_init", "_fini"}
+        # Besides the constructor only the type information of the UNO exceptions thrown to Calc,
+        # which must be visible for Calc to catch them (weak, merged with LibreOffice's own).
+        rtti = {s for s in exported if re.match(r"^_ZT[IS]N3com3sun4star", s)}
+        self.assertEqual(exported - rtti, {"org_coilwright_Functions_get_implementation"})
+
+
+class AddinSource(unittest.TestCase):
+    CODE_DIRS = ("engine", "addin")
+    FORBIDDEN_CALL = re.compile(r"\b(getenv|secure_getenv|system|popen|fopen|freopen|dlopen|socket|"
+                                r"execv|execl|execvp|fork|createInstance\w*|getServiceManager|"
+                                r"createUnoService)\s*\(")
+    FORBIDDEN_INCLUDE = re.compile(r"#\s*include\s*[<\"](fstream|filesystem|cstdio|stdio\.h|sys/socket\.h|"
+                                   r"netinet/\w+\.h|dlfcn\.h|unistd\.h|spawn\.h|osl/file\.hxx|osl/process\.h|"
+                                   r"osl/socket\.hxx|rtl/bootstrap\.hxx|com/sun/star/ucb/[^>\"]+|"
+                                   r"com/sun/star/script/[^>\"]+)[>\"]")
+
+    def test_no_code_that_reaches_outside_the_calculation(self):
+        found = []
+        for d in self.CODE_DIRS:
+            for path in sorted((SOURCE / d).rglob("*")):
+                if path.suffix not in (".cpp", ".hpp", ".h", ".inc", ".in"):
+                    continue
+                code = re.sub(r"//[^\n]*|/\*.*?\*/", "", path.read_text(), flags=re.S)
+                for rx in (self.FORBIDDEN_CALL, self.FORBIDDEN_INCLUDE):
+                    found += [f"{path.relative_to(SOURCE)}: {m.group(0)}" for m in rx.finditer(code)]
+        self.assertEqual(found, [])
+
+    def test_the_component_ignores_its_context(self):
+        # The constructor receives the component context (the door to files, network and
+        # macros through UNO services) and must not keep or use it.
+        text = (SOURCE / "addin" / "uno" / "component.cpp").read_text()
+        m = re.search(r"get_implementation\(\s*uno::XComponentContext\s*\*\s*(\w*)\s*,", text)
+        self.assertIsNotNone(m, "constructor signature not found")
+        self.assertEqual(m.group(1), "", "the constructor names (and so may use) its component context")
+
+
+class Extension(unittest.TestCase):
+    def test_contains_only_what_the_manifest_lists(self):
+        with zipfile.ZipFile(OXT) as z:
+            names = set(z.namelist())
+            manifest = z.read("META-INF/manifest.xml").decode()
+        self.assertEqual(names, OXT_CONTENT)
+        self.assertNotRegex(manifest, r"(?i)basic|script|macro")
+
+    def test_description_names_version_and_license(self):
+        with zipfile.ZipFile(OXT) as z:
+            root = ET.fromstring(z.read("description.xml"))
+            license_text = z.read("LICENSE.txt").decode()
+        version = root.find("d:version", DESCRIPTION_NS)
+        self.assertIsNotNone(version)
+        self.assertRegex(version.get("value"), r"^\d+\.\d+\.\d+$")
+        if VERSION:
+            self.assertEqual(version.get("value"), VERSION)
+        lic = root.find("d:registration/d:simple-license/d:license-text", DESCRIPTION_NS)
+        self.assertIsNotNone(lic, "description.xml has no license")
+        self.assertEqual(lic.get(f"{{{DESCRIPTION_NS['xlink']}}}href"), "LICENSE.txt")
+        self.assertIn("MIT License", license_text)
+        self.assertEqual(license_text, (SOURCE / "LICENSE").read_text())
+
+
+class Workbooks(unittest.TestCase):
+    SCRIPT_MARKERS = re.compile(r"script:event-listener|vnd\.sun\.star\.script:|macro:|ooo:macro|"
+                                r"office:script\b(?!s)|<office:scripts>\s*<")
+
+    def workbooks(self):
+        books = sorted((SOURCE / "sheets").glob("*.ods"))
+        self.assertTrue(books, "no workbooks in sheets/")
+        return books
+
+    def test_workbooks_carry_no_macros_or_scripts(self):
+        for book in self.workbooks():
+            with self.subTest(book=book.name), zipfile.ZipFile(book) as z:
+                names = z.namelist()
+                self.assertEqual([n for n in names if re.match(r"(?i)(basic|scripts|dialogs)/", n)], [])
+                manifest = z.read("META-INF/manifest.xml").decode()
+                self.assertNotRegex(manifest, r"(?i)basic|script")
+                for part in ("content.xml", "settings.xml", "styles.xml"):
+                    if part in names:
+                        self.assertNotRegex(z.read(part).decode(), self.SCRIPT_MARKERS, f"{book.name}/{part}")
+
+
+if __name__ == "__main__":
+    unittest.main()
