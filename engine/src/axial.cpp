@@ -10,25 +10,29 @@ namespace coilwright {
 
 namespace {
 
-AxialJet solenoid_term(double a, const AxialJet& u) {
+template <std::size_t N>
+Jet<N> solenoid_term(double a, const Jet<N>& u) {
     return u / sqrt(u * u + a * a);
 }
 
-AxialJet thick_term(double a1, double a2, const AxialJet& u) {
-    const AxialJet u2 = u * u;
+template <std::size_t N>
+Jet<N> thick_term(double a1, double a2, const Jet<N>& u) {
+    const Jet<N> u2 = u * u;
     return u * log((sqrt(u2 + a2 * a2) + a2) / (sqrt(u2 + a1 * a1) + a1));
 }
 
-AxialJet spiral_term(double a, const AxialJet& u) {
-    const AxialJet r = sqrt(u * u + a * a);
-    return log(r + a) - a * (AxialJet::constant(1.0) / r);
+template <std::size_t N>
+Jet<N> spiral_term(double a, const Jet<N>& u) {
+    const Jet<N> r = sqrt(u * u + a * a);
+    return log(r + a) - a * (Jet<N>::constant(1.0) / r);
 }
 
 }  // namespace
 
-AxialJet axial_jet(const CoilRow& row, double z0) {
+template <std::size_t N>
+Jet<N> axial_jet_n(const CoilRow& row, double z0) {
     const double k = kMu0 * row.turns * row.current / 2.0;
-    const AxialJet u = AxialJet::variable(z0 - row.centre_z);  // position relative to the centre
+    const Jet<N> u = Jet<N>::variable(z0 - row.centre_z);  // position relative to the centre
     const double a1 = row.inner_radius, a2 = row.outer_radius, len = row.length;
     switch (row.kind()) {
         case CoilRow::Kind::Loop:
@@ -43,15 +47,29 @@ AxialJet axial_jet(const CoilRow& row, double z0) {
     throw DomainError("unknown coil kind");
 }
 
-AxialJet axial_jet(const CoilTable& table, double z0) {
+template <std::size_t N>
+Jet<N> axial_jet_n(const CoilTable& table, double z0) {
     check::finite(z0, "z");
-    AxialJet sum;
-    for (const CoilRow& row : table.rows()) sum += axial_jet(row, z0);
+    Jet<N> sum;
+    for (const CoilRow& row : table.rows()) sum += axial_jet_n<N>(row, z0);
     return sum;
 }
 
+#define COILWRIGHT_AXIAL_ORDER(N)                                          \
+    template Jet<N> axial_jet_n<N>(const CoilRow& row, double z0);        \
+    template Jet<N> axial_jet_n<N>(const CoilTable& table, double z0);
+COILWRIGHT_AXIAL_ORDER(1)
+COILWRIGHT_AXIAL_ORDER(2)
+COILWRIGHT_AXIAL_ORDER(3)
+COILWRIGHT_AXIAL_ORDER(4)
+COILWRIGHT_AXIAL_ORDER(kMaxAxialOrder + 1)
+#undef COILWRIGHT_AXIAL_ORDER
+
+AxialJet axial_jet(const CoilRow& row, double z0) { return axial_jet_n<kMaxAxialOrder + 1>(row, z0); }
+AxialJet axial_jet(const CoilTable& table, double z0) { return axial_jet_n<kMaxAxialOrder + 1>(table, z0); }
+
 double axial_field(const CoilTable& table, double z) {
-    return check::finite_result(axial_jet(table, z).c[0], "Bz");
+    return check::finite_result(axial_jet_n<1>(table, z).c[0], "Bz");
 }
 
 std::vector<double> axial_derivatives(const CoilTable& table, double z, int order) {

@@ -29,7 +29,7 @@ void validate_shape(const CoilShape& coil) {
 // scanning outward from the centre and refining with TOMS 748.
 double first_sign_change(const CoilShape& coil, std::size_t k) {
     const CoilTable table = single(coil, 1.0, 1.0);
-    const auto derivative = [&](double u) { return axial_jet(table, u).c[k]; };
+    const auto derivative = [&](double u) { return axial_jet_n<4>(table, u).c[k]; };
     const double start = derivative(0.0) == 0.0 ? 1e-9 * coil.inner_radius : 0.0;
     const double sign0 = std::copysign(1.0, derivative(start));
     double lo = start;
@@ -81,7 +81,7 @@ double gradient_pair_gradient(const CoilShape& coil, double turns, double curren
     check::non_negative(spacing, "spacing");
     if (spacing < coil.length) throw DomainError("the coils overlap: spacing must be >= length");
     // B(z) = Bs(z - s/2) - Bs(z + s/2), so B'(0) = Bs'(-s/2) - Bs'(s/2) = -2 Bs'(s/2).
-    return -2.0 * axial_jet(single(coil, turns, current), spacing / 2.0).c[1];
+    return -2.0 * axial_jet_n<2>(single(coil, turns, current), spacing / 2.0).c[1];
 }
 
 double helmholtz_centre_field(double radius, double turns, double current) {

@@ -77,18 +77,18 @@ double field_sensitivity(const CoilTable& table, std::size_t index, CoilParamete
             CoilRow unit = row;
             unit.turns = 1.0;
             unit.current = 1.0;
-            const double per_ampere_turn = axial_jet(unit, z0).c[0];
+            const double per_ampere_turn = axial_jet_n<1>(unit, z0).c[0];
             return per_ampere_turn * (parameter == CoilParameter::Turns ? row.current : row.turns);
         }
         case CoilParameter::Position:
             // Moving a coil by d shifts its field: dB(z0)/d(centre) = -dB/dz.
-            return -axial_jet(row, z0).c[1];
+            return -axial_jet_n<2>(row, z0).c[1];
         default:
             break;
     }
     const double h = step_for(row, parameter);
     const bool at_lower_limit = parameter == CoilParameter::Length && row.length == 0.0;
-    const auto b = [&](double delta) { return axial_jet(perturbed(table, index, parameter, delta), z0).c[0]; };
+    const auto b = [&](double delta) { return axial_jet_n<1>(perturbed(table, index, parameter, delta), z0).c[0]; };
     if (at_lower_limit) {
         // A loop can only grow a length: one-sided differences, Richardson to second order.
         const double d1 = (b(h) - b(0)) / h, d2 = (b(h / 2) - b(0)) / (h / 2);

@@ -88,7 +88,7 @@ double axial_uniform_half_length(const CoilTable& table, double tolerance, doubl
 double axial_linear_half_length(const CoilTable& table, double tolerance, double z0) {
     check_tolerance(tolerance);
     check::finite(z0, "z");
-    const auto gradient = [&](double z) { return axial_jet(table, z).c[1]; };
+    const auto gradient = [&](double z) { return axial_jet_n<2>(table, z).c[1]; };
     const double g0 = gradient(z0);
     if (g0 == 0.0) throw DomainError("the gradient at the reference point is zero: linearity is undefined");
     const double limit = search_limit(table, z0);

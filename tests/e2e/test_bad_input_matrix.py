@@ -277,6 +277,10 @@ class BadInputMatrix(CalcTestCase):
                    f"{column_name(column + len(table[0]) - 1)}{top + len(rows)}")
             args = list(good)
             args[i] = ref
+            row_arg = case.get("table_row_arg")
+            if row_arg is not None and float(good[row_arg]) >= 2:
+                # Rows are numbered by position in the range: the blank row moves the later ones.
+                args[row_arg] = repr(float(good[row_arg]) + 1)
             c = sheet.getCellByPosition(column, 0)
             c.setFormula(call(name, args))
             self.assertEqual(self.outcome(c), want, f"{name}: table with a blank row")

@@ -81,7 +81,7 @@ TEST(ThreadSafety, ConcurrentCallsGiveTheSingleThreadedResults) {
     }
     ASSERT_GT(computed, calls.size() / 4) << "the mix should mostly compute";
 
-    constexpr int kThreads = 4, kRounds = 25;
+    constexpr int kThreads = 4, kRounds = 4;  // enough overlap; heavy functions (region searches) dominate the time
     std::atomic<std::size_t> mismatches{0};
     std::vector<std::thread> threads;
     for (int t = 0; t < kThreads; ++t)

@@ -21,6 +21,13 @@ using AxialJet = Jet<kMaxAxialOrder + 1>;
 AxialJet axial_jet(const CoilRow& row, double z0);
 AxialJet axial_jet(const CoilTable& table, double z0);
 
+// The same with only the first N coefficients (cheaper when few derivatives are needed);
+// instantiated for N = 1, 2, 3, 4 and kMaxAxialOrder + 1.
+template <std::size_t N>
+Jet<N> axial_jet_n(const CoilRow& row, double z0);
+template <std::size_t N>
+Jet<N> axial_jet_n(const CoilTable& table, double z0);
+
 // Bz on the axis (T).
 double axial_field(const CoilTable& table, double z);
 

@@ -25,7 +25,7 @@ struct Jet {
     static Jet variable(double x0) {  // the independent variable itself
         Jet j;
         j.c[0] = x0;
-        if (N > 1) j.c[1] = 1.0;
+        if constexpr (N > 1) j.c[1] = 1.0;
         return j;
     }
     // k-th derivative: k! c[k].

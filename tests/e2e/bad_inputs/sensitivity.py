@@ -10,5 +10,7 @@ CASES = {
                 3: ['"both"'],
                 5: ["0", "1"]},
         "bad_calls": [[_PAIR, "1", '"inner"', '"field"', "0", "0.001"]],   # a loop has no separate inner radius
+        # The row argument counts rows by position in the range, blank rows included.
+        "table_row_arg": 1,
     },
 }
