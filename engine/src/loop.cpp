@@ -20,6 +20,7 @@
 #include "coilwright/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "loop_kernel.hpp"
 
 namespace coilwright {
 
@@ -62,9 +63,25 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     check::finite(z, "z");
     check::non_negative(r, "r");
     const double a = loop.radius;
-    const FieldRZ unit = detail::loop_field_normalized(z / a, r / a, (a - r) / a);
     const double scale = kMu0 * loop.turns * loop.current / a;
-    const FieldRZ f = scale * unit;
+    // The fast kernel (shared with loop_field_batch, bit for bit) covers every point but those
+    // farther than 1e50 radii or nearer the wire than 1e-100 radii, which take the long way.
+    const double inv_a = 1.0 / a;
+    const double z_n = z * inv_a, r_n = r * inv_a, one_minus_r = (a - r) * inv_a;
+    FieldRZ f;
+    if (detail::in_kernel_range<detail::ScalarLanes>(z_n, r_n, one_minus_r)) {
+        using State = detail::KernelState<detail::ScalarLanes>;
+        State s = State::start(z_n, r_n, one_minus_r);
+        int steps = 0;
+        for (; s.active(); ++steps) {
+            if (steps == detail::kMaxGaussSteps)
+                throw ConvergenceError("the elliptic-integral iteration did not converge");
+            s.step(true);
+        }
+        s.finish(scale, f.bz, f.br);
+    } else {
+        f = scale * detail::loop_field_normalized(z / a, r / a, (a - r) / a);
+    }
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");
     return f;

@@ -1,0 +1,148 @@
+// The thin-loop field kernel, written once for one point (double) and for packs of points
+// (compiler vector types), so that the batch and the single-point functions perform the very
+// same floating-point operations and agree to the last bit. Private to the engine.
+//
+// Formulation (see loop.cpp for the derivation of the cancellation-free integrals): with
+// alpha^2 = (1 - r)^2 + z^2, beta^2 = (1 + r)^2 + z^2 (lengths in loop radii) and kc = alpha / beta,
+//   Bz = (U + (1 - r) W) / (beta^3 em (em + p) D),   Br = z W / (beta^3 em (em + p) D),
+// where, after the first Gauss step of Bulirsch's cel done by hand, the iteration runs on two
+// integrands sharing kc and p: U = (b0 + a0 em) * D and W = 2 r (b1 + a1 em), D = alpha^2 (1 + kc).
+// The second integrand starts from (1 + kc, 2 kc): the hand-made state k^2 (1/kc^2,
+// 2/(kc (1 + kc))) multiplied by kc^2 (1 + kc) / k^2, which is why D appears; that removes the
+// divisions of the starting state and leaves one division per point besides the Gauss steps.
+// Every quantity above is a sum or product of positive numbers except U + (1 - r) W, which
+// cancels only where Bz itself changes sign. Method: M. Ortner, P. Leitner, F. Slanovc,
+// Magnetism 3(1) (2023) 11-31; R. Bulirsch, Numer. Math. 13 (1969) 305-315.
+#pragma once
+
+#include <cmath>
+
+#include "coilwright/bulirsch_cel.hpp"
+
+namespace coilwright::detail {
+
+// The kernel works in loop radii on points with |z|, r below kKernelReach and alpha^2 above
+// kKernelNearest^2, so no intermediate over- or underflows; loop_field takes the few points
+// outside (farther than 1e50 radii, closer to the wire than 1e-100 radii) the careful way.
+inline constexpr double kKernelReach = 1e50;
+inline constexpr double kKernelNearest2 = 1e-200;
+// Gauss steps the kernel may take: kc >= 1e-100 needs fewer than 15; the cap only bounds the work.
+inline constexpr int kMaxGaussSteps = 40;
+
+// Lane operations for one point.
+struct ScalarLanes {
+    using V = double;
+    using M = bool;
+    static V splat(double x) { return x; }
+    static V sqrt(V x) { return std::sqrt(x); }
+    static V abs(V x) { return std::fabs(x); }
+    static V select(M m, V a, V b) { return m ? a : b; }
+    static bool any(M m) { return m; }
+    static bool all(M m) { return m; }
+};
+
+// Lane operations for a pack of W points in a compiler vector type (GCC and Clang vector
+// extensions: element-wise arithmetic and comparisons, ?: as a per-lane select).
+template <class Vec, class Mask, int W>
+struct PackLanes {
+    using V = Vec;
+    using M = Mask;
+    static V splat(double x) { return V{} + x; }
+    static V sqrt(V x) {
+        V out;
+        for (int i = 0; i < W; ++i) out[i] = std::sqrt(x[i]);  // one packed instruction with -fno-math-errno
+        return out;
+    }
+    static V abs(V x) { return x < 0.0 ? -x : x; }
+    static V select(M m, V a, V b) { return m ? a : b; }
+    static bool any(M m) {
+        bool r = false;
+        for (int i = 0; i < W; ++i) r |= m[i] != 0;
+        return r;
+    }
+    static bool all(M m) {
+        bool r = true;
+        for (int i = 0; i < W; ++i) r &= m[i] != 0;
+        return r;
+    }
+};
+
+// The kernel's state for one point or one pack of points, in three stages: start (geometry and
+// the first Gauss step, done by hand), step (one more Gauss step, only in lanes still active)
+// and finish (the field). Single points and packs run the same stages, so they agree bitwise.
+template <class L>
+struct KernelState {
+    using V = typename L::V;
+    // Kept for finish(): z, 1 - r, 2 r (loop radii), beta^3 and D = alpha^2 (1 + kc).
+    V z_n, one_minus_r, two_r, beta3, d;
+    // Bulirsch's qc, em, g, e; the integrands' (a, b) = (a_i, b_i) / t.
+    V qc, em, g, e, a0, b0, a1, b1, t;
+
+    // Only for points inside the kernel's range (in_kernel_range).
+    static KernelState start(V z, V r, V omr) {
+        KernelState s;
+        const V one_plus_r = 1.0 + r;
+        const V z2 = z * z;
+        const V alpha2 = omr * omr + z2;
+        const V beta2 = one_plus_r * one_plus_r + z2;
+        const V beta = L::sqrt(beta2);
+        const V kc = L::sqrt(alpha2) / beta;
+        s.z_n = z;
+        s.one_minus_r = omr;
+        s.two_r = 2.0 * r;
+        s.beta3 = beta2 * beta;
+        s.d = alpha2 * (1.0 + kc);
+        s.qc = kc;
+        s.em = 1.0 + kc;
+        s.g = L::splat(1.0);
+        s.e = kc;
+        s.a0 = L::splat(1.0);
+        s.b0 = L::splat(2.0);
+        s.a1 = 1.0 + kc;
+        s.b1 = 2.0 * kc;
+        s.t = L::splat(1.0);
+        return s;
+    }
+
+    // Lanes whose iteration has not converged yet.
+    typename L::M active() const { return L::abs(g - qc) > g * kCelTolerance; }
+
+    // One Gauss step in the lanes of `m` (the others keep their state). Bulirsch's step is
+    //   a' = a + b / p,  b' = 2 (b + a e' / p),  p' = p + e' / p,  e' = qc' em;
+    // here p = em throughout (both start at 1 + kc, and then p' = em + qc' = em'), so e' / p
+    // is qc'. The division by em is carried in t instead of done: a and b are stored times t.
+    void step(typename L::M m) {
+        const V qc_next = 2.0 * L::sqrt(e);
+        const V two_em = em + em;
+        const V a0_next = a0 * em + b0, b0_next = two_em * (b0 + a0 * qc_next);
+        const V a1_next = a1 * em + b1, b1_next = two_em * (b1 + a1 * qc_next);
+        e = L::select(m, qc_next * em, e);
+        qc = L::select(m, qc_next, qc);
+        a0 = L::select(m, a0_next, a0);
+        b0 = L::select(m, b0_next, b0);
+        a1 = L::select(m, a1_next, a1);
+        b1 = L::select(m, b1_next, b1);
+        t = L::select(m, t * em, t);
+        g = L::select(m, em, g);
+        em = L::select(m, em + qc_next, em);
+    }
+
+    // Bz and Br, times `scale`. Bulirsch's result (pi/2) (b + a em) / (em (em + p)) with p = em.
+    void finish(double scale, V& bz, V& br) const {
+        const V u = (b0 + a0 * em) * d;
+        const V w = two_r * (b1 + a1 * em);
+        const V factor = scale / (beta3 * d * t * (2.0 * em * em));
+        bz = (u + one_minus_r * w) * factor;
+        br = z_n * w * factor;
+    }
+};
+
+// Whether the kernel may be used at this point (false for NaN and infinities too).
+template <class L>
+auto in_kernel_range(typename L::V z_n, typename L::V r_n, typename L::V one_minus_r) {
+    const typename L::V z2 = z_n * z_n;
+    return (L::abs(z_n) < kKernelReach) & (r_n >= 0.0) & (r_n < kKernelReach) &
+           (one_minus_r * one_minus_r + z2 > kKernelNearest2);
+}
+
+}  // namespace coilwright::detail
