@@ -1,8 +1,8 @@
 // The loop field at many points: packs of points go through the same kernel as loop_field
-// (loop_kernel.hpp) in compiler vector types; where the processor has AVX2 a second copy of
-// the code uses it (selected when the library loads), the baseline copy runs on any x86-64.
-// Results are identical either way: the same IEEE operations in the same order, no fused
-// multiply-add (the engine is built with -ffp-contract=off).
+// (loop_kernel.hpp) in compiler vector types. The baseline copy of the code runs on any
+// x86-64 (SSE2); a second copy uses AVX2 where the processor has it (checked at run time, so
+// the extension stays portable). Results are identical either way: the same IEEE operations
+// in the same order, no fused multiply-add (the engine is built with -ffp-contract=off).
 #include "coilwright/loop_batch.hpp"
 
 #include <cmath>
@@ -23,7 +23,7 @@ using PackMask = decltype(Pack{} < Pack{});  // per-lane all-ones or zero
 using Lanes = detail::PackLanes<Pack, PackMask, kLanes>;
 
 // The careful single-point path for the points the kernel leaves out (and those in error).
-bool single_point(const LoopSpec& loop, double z, double r, double& bz, double& br) {
+[[gnu::noinline]] bool single_point(const LoopSpec& loop, double z, double r, double& bz, double& br) {
     try {
         const FieldRZ f = loop_field(loop, z, r);
         bz = f.bz;
@@ -36,12 +36,6 @@ bool single_point(const LoopSpec& loop, double z, double r, double& bz, double& 
     return false;
 }
 
-#if defined(__x86_64__) && defined(__GNUC__) && !defined(__clang__)
-#define COILWRIGHT_CLONES __attribute__((target_clones("avx2", "default"), flatten))
-#else
-#define COILWRIGHT_CLONES __attribute__((flatten))
-#endif
-
 // Points go through the kernel in blocks of kPacks packs; within a block the packs take their
 // Gauss steps side by side, so the processor overlaps their long chains of square roots and
 // divisions instead of waiting for each in turn.
@@ -50,10 +44,11 @@ constexpr std::size_t kBlock = kPacks * kLanes;
 using State = detail::KernelState<Lanes>;
 
 // Field at z[i] - centre_z, r[i] for one block of `count` <= kBlock points; stores (add =
-// false) or adds (add = true) into bz, br. Returns the number of points in error.
-COILWRIGHT_CLONES
-std::size_t run_block(const LoopSpec& loop, double inv_a, double scale, double centre_z, const double* z,
-                      const double* r, std::size_t count, double* bz, double* br, bool add) {
+// false) or adds (add = true) into bz, br. Returns the number of points in error. Compiled
+// once per instruction set by the wrappers below.
+[[gnu::always_inline]] inline std::size_t block(const LoopSpec& loop, double inv_a, double scale, double centre_z,
+                                                const double* z, const double* r, std::size_t count, double* bz,
+                                                double* br, bool add) {
     const double a = loop.radius;
     double zs[kBlock], rs[kBlock];
     if (count == kBlock) {
@@ -133,8 +128,51 @@ std::size_t run_block(const LoopSpec& loop, double inv_a, double scale, double c
     return failed;
 }
 
-std::size_t run(const LoopSpec& loop, double centre_z, const double* z, const double* r, std::size_t n, double* bz,
-                double* br, bool add) {
+using BlockFn = std::size_t (*)(const LoopSpec&, double, double, double, const double*, const double*, std::size_t,
+                                double*, double*, bool);
+
+[[gnu::flatten]] std::size_t block_baseline(const LoopSpec& loop, double inv_a, double scale, double centre_z,
+                                            const double* z, const double* r, std::size_t count, double* bz,
+                                            double* br, bool add) {
+    return block(loop, inv_a, scale, centre_z, z, r, count, bz, br, add);
+}
+
+#if defined(__x86_64__) && defined(__GNUC__)
+#define COILWRIGHT_HAVE_AVX2_COPY 1
+[[gnu::target("avx2"), gnu::flatten]] std::size_t block_avx2(const LoopSpec& loop, double inv_a, double scale,
+                                                             double centre_z, const double* z, const double* r,
+                                                             std::size_t count, double* bz, double* br, bool add) {
+    return block(loop, inv_a, scale, centre_z, z, r, count, bz, br, add);
+}
+#endif
+
+bool processor_has_avx2() {
+#ifdef COILWRIGHT_HAVE_AVX2_COPY
+    static const bool has = __builtin_cpu_supports("avx2");
+    return has;
+#else
+    return false;
+#endif
+}
+
+BlockFn block_for(detail::BatchCode code) {
+#ifdef COILWRIGHT_HAVE_AVX2_COPY
+    if (code == detail::BatchCode::Avx2 && processor_has_avx2()) return block_avx2;
+#endif
+    return block_baseline;
+}
+
+}  // namespace
+
+namespace detail {
+
+BatchCode best_batch_code() { return processor_has_avx2() ? BatchCode::Avx2 : BatchCode::Baseline; }
+
+std::size_t loop_field_batch_using(BatchCode code, const LoopSpec& loop, double centre_z, const double* z,
+                                   const double* r, std::size_t n, double* bz, double* br, bool add) {
+    validate(loop);
+    check::finite(centre_z, "centre z");
+    const BlockFn run_block = block_for(code);
     const double inv_a = 1.0 / loop.radius;
     const double scale = kMu0 * loop.turns * loop.current / loop.radius;
     std::size_t failed = 0;
@@ -145,19 +183,16 @@ std::size_t run(const LoopSpec& loop, double centre_z, const double* z, const do
     return failed;
 }
 
-}  // namespace
+}  // namespace detail
 
 std::size_t loop_field_batch(const LoopSpec& loop, const double* z, const double* r, std::size_t n, double* bz,
                              double* br) {
-    validate(loop);
-    return run(loop, 0.0, z, r, n, bz, br, false);
+    return detail::loop_field_batch_using(detail::best_batch_code(), loop, 0.0, z, r, n, bz, br, false);
 }
 
 std::size_t add_loop_field_batch(const LoopSpec& loop, double centre_z, const double* z, const double* r,
                                  std::size_t n, double* bz, double* br) {
-    validate(loop);
-    check::finite(centre_z, "centre z");
-    return run(loop, centre_z, z, r, n, bz, br, true);
+    return detail::loop_field_batch_using(detail::best_batch_code(), loop, centre_z, z, r, n, bz, br, true);
 }
 
 }  // namespace coilwright
