@@ -1,5 +1,7 @@
 #include "any_conversion.hpp"
 
+#include <algorithm>
+#include <cstddef>
 #include <cstdint>
 #include <cstring>
 
@@ -45,7 +47,16 @@ sheet::Arg to_arg(const Any& value) {
         std::vector<sheet::Cell> cells(rows * cols);  // ragged rows leave blanks
         for (std::size_t r = 0; r < rows; ++r) {
             const auto& row = range[static_cast<sal_Int32>(r)];
-            for (sal_Int32 c = 0; c < row.getLength(); ++c) cells[r * cols + c] = to_cell(row[c]);
+            sheet::Cell* out = cells.data() + r * cols;
+            for (sal_Int32 c = 0; c < row.getLength(); ++c) {
+                const Any& v = row[c];
+                if (v.getValueTypeClass() == TypeClass_DOUBLE) {  // the usual cell: no temporary
+                    out[c].kind = sheet::CellKind::Number;
+                    out[c].number = *static_cast<const double*>(v.getValue());
+                } else {
+                    out[c] = to_cell(v);
+                }
+            }
         }
         return sheet::Arg::array(rows, cols, std::move(cells));
     }
@@ -65,11 +76,20 @@ Any to_any(const sheet::CallResult& result) {
     if (!result.is_array) return Any(result.values.at(0));
     Sequence<Sequence<double>> out(static_cast<sal_Int32>(result.rows));
     auto* rows = out.getArray();
+    const auto cols = static_cast<sal_Int32>(result.cols);
     for (std::size_t r = 0; r < result.rows; ++r) {
-        Sequence<double> row(static_cast<sal_Int32>(result.cols));
+        const std::size_t first = r * result.cols;
+        const bool clean = std::all_of(result.errors.begin() + static_cast<std::ptrdiff_t>(first),
+                                       result.errors.begin() + static_cast<std::ptrdiff_t>(first + result.cols),
+                                       [](sheet::CellError e) { return e == sheet::CellError::None; });
+        if (clean) {  // copied in one go
+            rows[r] = Sequence<double>(result.values.data() + first, cols);
+            continue;
+        }
+        Sequence<double> row(cols);
         double* dst = row.getArray();
         for (std::size_t c = 0; c < result.cols; ++c) {
-            const std::size_t at = r * result.cols + c;
+            const std::size_t at = first + c;
             dst[c] = result.errors[at] == sheet::CellError::None ? result.values[at]
                                                                   : calc_error_value(result.errors[at]);
         }

@@ -47,7 +47,7 @@ private:
     uno::Any dispatch(std::size_t index, const uno::Any* const* args, std::size_t count) {
         sheet::CallResult result;
         try {
-            std::array<sheet::Arg, 16> converted;  // no function has more arguments (checked by a test)
+            std::array<sheet::Arg, sheet::kMaxArgs> converted;  // no function has more (checked by a test)
             if (count > converted.size()) throw std::length_error("too many arguments");
             for (std::size_t i = 0; i < count; ++i) converted[i] = to_arg(*args[i]);
             result = sheet::evaluate(index, {converted.data(), count});
