@@ -39,14 +39,17 @@ sheet::Cell to_cell(const Any& v) {
 
 sheet::Arg to_arg(const Any& value) {
     if (!value.hasValue()) return sheet::Arg::missing();
-    Sequence<Sequence<Any>> range;
-    if (value.getValueTypeClass() == TypeClass_SEQUENCE && (value >>= range)) {
-        const std::size_t rows = static_cast<std::size_t>(range.getLength());
+    if (value.getValueTypeClass() != TypeClass_SEQUENCE) return sheet::Arg::scalar(to_cell(value));
+    Sequence<Sequence<Any>> range;  // built only here: even an empty one costs a type lookup
+    if (value >>= range) {
+        // Read through a const view: the non-const accessors would copy the shared sequence.
+        const Sequence<Sequence<Any>>& view = range;
+        const std::size_t rows = static_cast<std::size_t>(view.getLength());
         std::size_t cols = 0;
-        for (const auto& row : range) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
+        for (const auto& row : view) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
         std::vector<sheet::Cell> cells(rows * cols);  // ragged rows leave blanks
         for (std::size_t r = 0; r < rows; ++r) {
-            const auto& row = range[static_cast<sal_Int32>(r)];
+            const auto& row = view[static_cast<sal_Int32>(r)];
             sheet::Cell* out = cells.data() + r * cols;
             for (sal_Int32 c = 0; c < row.getLength(); ++c) {
                 const Any& v = row[c];
@@ -60,9 +63,7 @@ sheet::Arg to_arg(const Any& value) {
         }
         return sheet::Arg::array(rows, cols, std::move(cells));
     }
-    if (value.getValueTypeClass() == TypeClass_SEQUENCE)
-        return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
-    return sheet::Arg::scalar(to_cell(value));
+    return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
 }
 
 double calc_error_value(sheet::CellError error) {
