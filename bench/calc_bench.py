@@ -9,7 +9,9 @@ medians, in one run:
   per-cell    50,000 cells =LOOP_BZ(a;N;I;A1) against 50,000 cells of the hand-typed on-axis
               formula =mu0*N*I*a^2/(2*(a^2+A1^2)^1.5): time per cell and the ratio add-in/native;
   array       one array formula {=LOOP_BZ(a;N;I;A1:A100000;B1:B100000)} (100,000 off-axis
-              points) against a native 100,000-cell column of the hand-typed formula.
+              points) against a native 100,000-cell column of the hand-typed formula;
+              for reference, Calc's own array formula {=A1:A100000*B1:B100000} over the same
+              two columns (what any 100,000-cell array result costs in Calc, without UNO).
 
 Times are wall-clock seconds of the calculateAll call (what a user waits for) and, beside
 them, the processor time LibreOffice spent (all its threads, from /proc/<pid>/task/*/schedstat),
@@ -139,11 +141,19 @@ def build_cases(session, cells, array_points):
             f"=LOOP_BZ({RADIUS};{TURNS};{CURRENT};A1:A{n};B1:B{n})")
         check_no_errors(sheet, 2, n)
 
+    def native_array(sheet):  # reference: Calc's own array formula over the same two columns
+        n = array_points
+        column(sheet, 0, zs[:n])
+        column(sheet, 1, rs[:n])
+        sheet.getCellRangeByPosition(2, 0, 2, n - 1).setArrayFormula(f"=A1:A{n}*B1:B{n}")
+        check_no_errors(sheet, 2, n)
+
     return {
         "native_cells": Case(session, "native_cells", cells, native(cells)),
         "addin_cells": Case(session, "addin_cells", cells, addin_cells),
         "native_column": Case(session, "native_column", array_points, native(array_points)),
         "addin_array": Case(session, "addin_array", array_points, addin_array),
+        "native_array": Case(session, "native_array", array_points, native_array),
     }
 
 
@@ -170,7 +180,8 @@ def main():
         print(f"{case.name} {case.cells} cells: wall {case.median('wall'):.4f} s "
               f"({case.median('wall') / case.cells * 1e6:.3f} us per cell), cpu {case.median('cpu'):.4f} s")
     for label, num, den in (("per_cell_ratio addin/native", "addin_cells", "native_cells"),
-                            ("array_ratio addin_array/native_column", "addin_array", "native_column")):
+                            ("array_ratio addin_array/native_column", "addin_array", "native_column"),
+                            ("reference native_array/native_column", "native_array", "native_column")):
         wall = cases[num].median("wall") / cases[den].median("wall")
         cpu = cases[num].median("cpu") / cases[den].median("cpu")
         print(f"{label} {wall:.2f} (processor time {cpu:.2f})")

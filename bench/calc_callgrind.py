@@ -2,8 +2,8 @@
 """Where the time of a recalculation goes, counted in machine instructions (valgrind's
 callgrind), which other processes on a busy machine do not disturb the way they disturb clocks.
 
-For each case of bench/calc_bench.py (smaller, since callgrind runs code about 50 times
-slower) it starts a private LibreOffice under callgrind with instrumentation off, builds the
+For the cases of bench/calc_bench.py (smaller, since callgrind runs code about 50 times
+slower; the native column doubles as the native cells) it starts a private LibreOffice under callgrind with instrumentation off, builds the
 document, switches instrumentation on for exactly one calculateAll, and reads the inclusive
 instruction counts of the functions that matter. Prints instructions per cell for:
   total        the whole recalculation, every thread of LibreOffice (Calc may spread
@@ -118,14 +118,20 @@ def main():
         sheet.getCellRangeByPosition(2, 0, 2, n - 1).setArrayFormula(
             f"=LOOP_BZ({cb.RADIUS};{cb.TURNS};{cb.CURRENT};A1:A{n};B1:B{n})")
 
+    def native_array(sheet):  # reference: Calc's own array formula, no UNO
+        cb.column(sheet, 0, zs)
+        cb.column(sheet, 1, rs)
+        sheet.getCellRangeByPosition(2, 0, 2, n - 1).setArrayFormula(f"=A1:A{n}*B1:B{n}")
+
     with tempfile.TemporaryDirectory(prefix="coilwright-callgrind-") as tmp:
         workdir = args.keep or tmp
         pathlib.Path(workdir).mkdir(parents=True, exist_ok=True)
         totals = {name: profile_case(args.oxt, name, build, n, workdir)
                   for name, build in (("native_cells", native), ("addin_cells", addin_cells),
-                                      ("addin_array", addin_array))}
+                                      ("addin_array", addin_array), ("native_array", native_array))}
     print(f"per_cell_ratio addin/native {totals['addin_cells'] / totals['native_cells']:.2f} (instructions)")
     print(f"array_ratio addin_array/native_column {totals['addin_array'] / totals['native_cells']:.2f} (instructions)")
+    print(f"reference native_array/native_column {totals['native_array'] / totals['native_cells']:.2f} (instructions)")
 
 
 if __name__ == "__main__":

@@ -93,8 +93,11 @@ void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> n
         for (std::size_t i = 0; i < m; ++i) {
             bool ok = true;
             for (std::size_t k = 0; k < n_args; ++k) {
+                const Cell& cell = cell_of_element(*numbers[k], r, c);
                 double v;
-                if (!to_number(cell_of_element(*numbers[k], r, c), *number_specs[k], v, message)) {
+                if (cell.kind == CellKind::Number && number_specs[k]->kind == ArgKind::Number) {
+                    v = cell.number;  // the usual case, as to_number does it
+                } else if (!to_number(cell, *number_specs[k], v, message)) {
                     ok = false;
                     v = std::numeric_limits<double>::quiet_NaN();
                 }

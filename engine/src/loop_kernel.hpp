@@ -33,12 +33,11 @@ inline constexpr int kMaxGaussSteps = 40;
 struct ScalarLanes {
     using V = double;
     using M = bool;
-    static V splat(double x) { return x; }
-    static V sqrt(V x) { return std::sqrt(x); }
-    static V abs(V x) { return std::fabs(x); }
-    static V select(M m, V a, V b) { return m ? a : b; }
-    static bool any(M m) { return m; }
-    static bool all(M m) { return m; }
+    [[gnu::always_inline]] static V splat(double x) { return x; }
+    [[gnu::always_inline]] static V sqrt(V x) { return std::sqrt(x); }
+    [[gnu::always_inline]] static V abs(V x) { return std::fabs(x); }
+    [[gnu::always_inline]] static V select(M m, V a, V b) { return m ? a : b; }
+    [[gnu::always_inline]] static bool any(M m) { return m; }
 };
 
 // Lane operations for a pack of W points in a compiler vector type (GCC and Clang vector
@@ -47,22 +46,17 @@ template <class Vec, class Mask, int W>
 struct PackLanes {
     using V = Vec;
     using M = Mask;
-    static V splat(double x) { return V{} + x; }
-    static V sqrt(V x) {
+    [[gnu::always_inline]] static V splat(double x) { return V{} + x; }
+    [[gnu::always_inline]] static V sqrt(V x) {
         V out;
         for (int i = 0; i < W; ++i) out[i] = std::sqrt(x[i]);  // one packed instruction with -fno-math-errno
         return out;
     }
-    static V abs(V x) { return x < 0.0 ? -x : x; }
-    static V select(M m, V a, V b) { return m ? a : b; }
-    static bool any(M m) {
+    [[gnu::always_inline]] static V abs(V x) { return x < 0.0 ? -x : x; }
+    [[gnu::always_inline]] static V select(M m, V a, V b) { return m ? a : b; }
+    [[gnu::always_inline]] static bool any(M m) {
         bool r = false;
         for (int i = 0; i < W; ++i) r |= m[i] != 0;
-        return r;
-    }
-    static bool all(M m) {
-        bool r = true;
-        for (int i = 0; i < W; ++i) r &= m[i] != 0;
         return r;
     }
 };
@@ -79,7 +73,7 @@ struct KernelState {
     V qc, em, g, e, a0, b0, a1, b1, t;
 
     // Only for points inside the kernel's range (in_kernel_range).
-    static KernelState start(V z, V r, V omr) {
+    [[gnu::always_inline]] static KernelState start(V z, V r, V omr) {
         KernelState s;
         const V one_plus_r = 1.0 + r;
         const V z2 = z * z;
@@ -105,13 +99,13 @@ struct KernelState {
     }
 
     // Lanes whose iteration has not converged yet.
-    typename L::M active() const { return L::abs(g - qc) > g * kCelTolerance; }
+    [[gnu::always_inline]] typename L::M active() const { return L::abs(g - qc) > g * kCelTolerance; }
 
     // One Gauss step in the lanes of `m` (the others keep their state). Bulirsch's step is
     //   a' = a + b / p,  b' = 2 (b + a e' / p),  p' = p + e' / p,  e' = qc' em;
     // here p = em throughout (both start at 1 + kc, and then p' = em + qc' = em'), so e' / p
     // is qc'. The division by em is carried in t instead of done: a and b are stored times t.
-    void step(typename L::M m) {
+    [[gnu::always_inline]] void step(typename L::M m) {
         const V qc_next = 2.0 * L::sqrt(e);
         const V two_em = em + em;
         const V a0_next = a0 * em + b0, b0_next = two_em * (b0 + a0 * qc_next);
@@ -128,7 +122,7 @@ struct KernelState {
     }
 
     // Bz and Br, times `scale`. Bulirsch's result (pi/2) (b + a em) / (em (em + p)) with p = em.
-    void finish(double scale, V& bz, V& br) const {
+    [[gnu::always_inline]] void finish(double scale, V& bz, V& br) const {
         const V u = (b0 + a0 * em) * d;
         const V w = two_r * (b1 + a1 * em);
         const V factor = scale / (beta3 * d * t * (2.0 * em * em));
@@ -139,7 +133,7 @@ struct KernelState {
 
 // Whether the kernel may be used at this point (false for NaN and infinities too).
 template <class L>
-auto in_kernel_range(typename L::V z_n, typename L::V r_n, typename L::V one_minus_r) {
+[[gnu::always_inline]] inline auto in_kernel_range(typename L::V z_n, typename L::V r_n, typename L::V one_minus_r) {
     const typename L::V z2 = z_n * z_n;
     return (L::abs(z_n) < kKernelReach) & (r_n >= 0.0) & (r_n < kKernelReach) &
            (one_minus_r * one_minus_r + z2 > kKernelNearest2);
