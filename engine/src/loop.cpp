@@ -76,7 +76,7 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
         for (; s.active(); ++steps) {
             if (steps == detail::kMaxGaussSteps)
                 throw ConvergenceError("the elliptic-integral iteration did not converge");
-            s.step(true);
+            s.step<true>(true);
         }
         s.finish(scale, f.bz, f.br);
     } else {

@@ -50,25 +50,22 @@ using State = detail::KernelState<Lanes>;
                                                 const double* z, const double* r, std::size_t count, double* bz,
                                                 double* br, bool add) {
     const double a = loop.radius;
-    double zs[kBlock], rs[kBlock];
-    if (count == kBlock) {
-        for (std::size_t i = 0; i < kBlock; ++i) {
-            zs[i] = z[i] - centre_z;
-            rs[i] = r[i];
-        }
-    } else {
-        for (std::size_t i = 0; i < kBlock; ++i) {  // a short block is padded with the centre
-            zs[i] = i < count ? z[i] - centre_z : 0.0;
-            rs[i] = i < count ? r[i] : 0.0;
-        }
-    }
     State state[kPacks];
     PackMask in_range[kPacks];
     const Pack zero{};
     for (std::size_t k = 0; k < kPacks; ++k) {
-        Pack zp, rp;
-        __builtin_memcpy(&zp, zs + k * kLanes, sizeof zp);
-        __builtin_memcpy(&rp, rs + k * kLanes, sizeof rp);
+        const std::size_t first = k * kLanes;
+        Pack zp = zero, rp = zero;  // lanes past the end compute the centre
+        if (first + kLanes <= count) {
+            __builtin_memcpy(&zp, z + first, sizeof zp);
+            __builtin_memcpy(&rp, r + first, sizeof rp);
+        } else {
+            for (std::size_t j = 0; first + j < count; ++j) {
+                zp[j] = z[first + j];
+                rp[j] = r[first + j];
+            }
+        }
+        zp -= centre_z;
         const Pack z_n = zp * inv_a, r_n = rp * inv_a, omr = (a - rp) * inv_a;
         const PackMask ok = detail::in_kernel_range<Lanes>(z_n, r_n, omr);
         in_range[k] = ok;
@@ -80,9 +77,13 @@ using State = detail::KernelState<Lanes>;
         bool any = false;
         for (std::size_t k = 0; k < kPacks; ++k) {
             const PackMask m = state[k].active();
-            if (!Lanes::any(m)) continue;
+            const unsigned lanes = Lanes::lane_bits(m);
+            if (lanes == 0) continue;
             any = true;
-            state[k].step(m);
+            if (lanes == (1u << kLanes) - 1)
+                state[k].step<true>(m);  // no lane has converged: no selects
+            else
+                state[k].step(m);
         }
         if (!any) {
             converged = true;
@@ -114,7 +115,7 @@ using State = detail::KernelState<Lanes>;
             const std::size_t i = first + j;
             double vz = fz[j], vr = fr[j];
             if (redo[j] || !converged) {
-                if (!single_point(loop, zs[i], rs[i], vz, vr)) ++failed;
+                if (!single_point(loop, z[i] - centre_z, r[i], vz, vr)) ++failed;
             }
             if (add) {
                 bz[i] += vz;

@@ -16,6 +16,9 @@
 #pragma once
 
 #include <cmath>
+#if defined(__SSE2__)
+#include <emmintrin.h>
+#endif
 
 #include "coilwright/bulirsch_cel.hpp"
 
@@ -38,6 +41,7 @@ struct ScalarLanes {
     [[gnu::always_inline]] static V abs(V x) { return std::fabs(x); }
     [[gnu::always_inline]] static V select(M m, V a, V b) { return m ? a : b; }
     [[gnu::always_inline]] static bool any(M m) { return m; }
+    [[gnu::always_inline]] static bool all(M m) { return m; }
 };
 
 // Lane operations for a pack of W points in a compiler vector type (GCC and Clang vector
@@ -52,13 +56,29 @@ struct PackLanes {
         for (int i = 0; i < W; ++i) out[i] = std::sqrt(x[i]);  // one packed instruction with -fno-math-errno
         return out;
     }
-    [[gnu::always_inline]] static V abs(V x) { return x < 0.0 ? -x : x; }
-    [[gnu::always_inline]] static V select(M m, V a, V b) { return m ? a : b; }
-    [[gnu::always_inline]] static bool any(M m) {
-        bool r = false;
-        for (int i = 0; i < W; ++i) r |= m[i] != 0;
-        return r;
+    [[gnu::always_inline]] static V abs(V x) {  // clears the sign bit, as std::fabs
+        return (V)((M)x & ~(M{} + static_cast<long long>(0x8000000000000000ULL)));
     }
+    [[gnu::always_inline]] static V select(M m, V a, V b) { return m ? a : b; }
+    // One bit per lane (bit i set where lane i of the mask is set).
+    [[gnu::always_inline]] static unsigned lane_bits(M m) {
+#if defined(__SSE2__)
+        static_assert(sizeof(M) % 16 == 0);
+        unsigned bits = 0;  // movmskpd on each 128-bit half: two lanes per instruction
+        for (unsigned h = 0; h < sizeof(M) / 16; ++h) {
+            __m128d half;
+            __builtin_memcpy(&half, reinterpret_cast<const char*>(&m) + 16 * h, 16);
+            bits |= static_cast<unsigned>(_mm_movemask_pd(half)) << (2 * h);
+        }
+        return bits;
+#else
+        unsigned bits = 0;
+        for (int i = 0; i < W; ++i) bits |= (m[i] != 0 ? 1u : 0u) << i;
+        return bits;
+#endif
+    }
+    [[gnu::always_inline]] static bool any(M m) { return lane_bits(m) != 0; }
+    [[gnu::always_inline]] static bool all(M m) { return lane_bits(m) == (1u << W) - 1; }
 };
 
 // The kernel's state for one point or one pack of points, in three stages: start (geometry and
@@ -101,24 +121,39 @@ struct KernelState {
     // Lanes whose iteration has not converged yet.
     [[gnu::always_inline]] typename L::M active() const { return L::abs(g - qc) > g * kCelTolerance; }
 
-    // One Gauss step in the lanes of `m` (the others keep their state). Bulirsch's step is
+    // One Gauss step in the lanes of `m` (the others keep their state); in every lane when
+    // kEveryLane (no per-lane selects while no lane has converged). Bulirsch's step is
     //   a' = a + b / p,  b' = 2 (b + a e' / p),  p' = p + e' / p,  e' = qc' em;
     // here p = em throughout (both start at 1 + kc, and then p' = em + qc' = em'), so e' / p
     // is qc'. The division by em is carried in t instead of done: a and b are stored times t.
+    template <bool kEveryLane = false>
     [[gnu::always_inline]] void step(typename L::M m) {
         const V qc_next = 2.0 * L::sqrt(e);
         const V two_em = em + em;
         const V a0_next = a0 * em + b0, b0_next = two_em * (b0 + a0 * qc_next);
         const V a1_next = a1 * em + b1, b1_next = two_em * (b1 + a1 * qc_next);
-        e = L::select(m, qc_next * em, e);
-        qc = L::select(m, qc_next, qc);
-        a0 = L::select(m, a0_next, a0);
-        b0 = L::select(m, b0_next, b0);
-        a1 = L::select(m, a1_next, a1);
-        b1 = L::select(m, b1_next, b1);
-        t = L::select(m, t * em, t);
-        g = L::select(m, em, g);
-        em = L::select(m, em + qc_next, em);
+        const V e_next = qc_next * em, t_next = t * em, em_next = em + qc_next;
+        if constexpr (kEveryLane) {
+            e = e_next;
+            qc = qc_next;
+            a0 = a0_next;
+            b0 = b0_next;
+            a1 = a1_next;
+            b1 = b1_next;
+            t = t_next;
+            g = em;
+            em = em_next;
+        } else {
+            e = L::select(m, e_next, e);
+            qc = L::select(m, qc_next, qc);
+            a0 = L::select(m, a0_next, a0);
+            b0 = L::select(m, b0_next, b0);
+            a1 = L::select(m, a1_next, a1);
+            b1 = L::select(m, b1_next, b1);
+            t = L::select(m, t_next, t);
+            g = L::select(m, em, g);
+            em = L::select(m, em_next, em);
+        }
     }
 
     // Bz and Br, times `scale`. Bulirsch's result (pi/2) (b + a em) / (em (em + p)) with p = em.
