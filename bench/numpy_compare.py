@@ -6,10 +6,11 @@ the textbook elliptic-integral formula (W. R. Smythe, Static and Dynamic Electri
 J. D. Jackson, Classical Electrodynamics, sec. 5.5) with scipy.special.ellipk/ellipe over
 whole numpy arrays, and prints both costs per point and their ratio. Also prints how far the
 two results are apart, to show they compute the same field (the textbook form loses digits
-near the axis and far away, so some difference there is expected from it).
+near the axis and far away, so some difference there is expected from it). Both sides are
+timed in this thread's processor time, in alternating rounds, and medians are printed.
 
 Run with Debian's python (numpy, scipy):
-    /usr/bin/python3 bench/numpy_compare.py [--bench build/bench/field-bench] [--points N]
+    /usr/bin/python3 bench/numpy_compare.py [--bench build/bench/field-bench] [--points N] [--rounds R]
 """
 import argparse
 import os
@@ -58,13 +59,14 @@ def main():
     ap.add_argument("--bench", default=str(root / "build" / "bench" / "field-bench"))
     ap.add_argument("--points", type=int, default=100000)
     ap.add_argument("--repeat", type=int, default=15)
+    ap.add_argument("--rounds", type=int, default=5, help="alternating runs of each side (median taken)")
     args = ap.parse_args()
 
     with tempfile.TemporaryDirectory() as tmp:
         points_file, field_file = os.path.join(tmp, "points"), os.path.join(tmp, "field")
         # Interleave the two measurements so that a busy machine affects both alike.
         numpy_ns, bench_ns = [], []
-        for _ in range(3):
+        for _ in range(args.rounds):
             out = subprocess.run([args.bench, "--kernel", "loop_offaxis", "--points", str(args.points),
                                   "--repeat", str(args.repeat), "--write-points", points_file,
                                   "--write-field", field_file],
@@ -83,7 +85,8 @@ def main():
     print(f"numpy_scipy_loop_offaxis {numpy_med:.1f}")
     print(f"loop_offaxis {bench_med:.1f}")
     print(f"ratio numpy_scipy/loop_offaxis {numpy_med / bench_med:.1f}")
-    print(f"# {args.points} points; medians of 3 runs x {args.repeat} passes (ns per point); "
+    print(f"# {args.points} points; medians of {args.rounds} alternating runs x {args.repeat} passes "
+          f"(processor time, ns per point); "
           f"largest difference numpy - engine: {worst:.1e} of |B|")
 
 
