@@ -149,7 +149,10 @@ using BlockFn = std::size_t (*)(const LoopSpec&, double, double, double, const d
 
 bool processor_has_avx2() {
 #ifdef COILWRIGHT_HAVE_AVX2_COPY
-    static const bool has = __builtin_cpu_supports("avx2");
+    static const bool has = [] {
+        __builtin_cpu_init();  // harmless if already done; needed if called before constructors ran
+        return __builtin_cpu_supports("avx2") != 0;
+    }();
     return has;
 #else
     return false;
