@@ -2,17 +2,20 @@
 // (compiler vector types), so that the batch and the single-point functions perform the very
 // same floating-point operations and agree to the last bit. Private to the engine.
 //
-// Formulation (see loop.cpp for the derivation of the cancellation-free integrals): with
-// alpha^2 = (1 - r)^2 + z^2, beta^2 = (1 + r)^2 + z^2 (lengths in loop radii) and kc = alpha / beta,
-//   Bz = (U + (1 - r) W) / (beta^3 em (em + p) D),   Br = z W / (beta^3 em (em + p) D),
-// where, after the first Gauss step of Bulirsch's cel done by hand, the iteration runs on two
-// integrands sharing kc and p: U = (b0 + a0 em) * D and W = 2 r (b1 + a1 em), D = alpha^2 (1 + kc).
-// The second integrand starts from (1 + kc, 2 kc): the hand-made state k^2 (1/kc^2,
-// 2/(kc (1 + kc))) multiplied by kc^2 (1 + kc) / k^2, which is why D appears; that removes the
-// divisions of the starting state and leaves one division per point besides the Gauss steps.
-// Every quantity above is a sum or product of positive numbers except U + (1 - r) W, which
-// cancels only where Bz itself changes sign. Method: M. Ortner, P. Leitner, F. Slanovc,
-// Magnetism 3(1) (2023) 11-31; R. Bulirsch, Numer. Math. 13 (1969) 305-315.
+// Formulation (see loop.cpp for the cancellation-free integrals it rests on): with lengths in
+// loop radii, alpha^2 = (1 - r)^2 + z^2, beta^2 = (1 + r)^2 + z^2 and kc = alpha / beta, the
+// first Gauss step of Bulirsch's cel is done by hand and the iteration runs on two integrands
+// that share kc: (a0, b0) from (1, 2) for the axial one, (a1, b1) from (1 + kc, 2 kc) for the
+// radial one. That is the hand-made state k^2 (1/kc^2, 2/(kc (1 + kc))) times kc^2 (1 + kc) / k^2,
+// which removes the divisions from the start; D = alpha^2 (1 + kc) puts the factor back. For
+// cel(kc, kc^2, ., .) Bulirsch's p equals em at every step, so the division by p in each step is
+// a division by em, which is carried along in t instead of done. At the end
+//   Bz = (U + (1 - r) W) / (2 beta^3 D t em^2),   Br = z W / (2 beta^3 D t em^2),
+//   U = (b0 + a0 em) D,   W = 2 r (b1 + a1 em):
+// two divisions per point (kc and the last line) and one square root per Gauss step. Every
+// quantity is a sum or product of positive numbers except U + (1 - r) W, which cancels only
+// where Bz itself changes sign. Method: M. Ortner, P. Leitner, F. Slanovc, Magnetism 3(1) (2023)
+// 11-31; R. Bulirsch, Numer. Math. 13 (1969) 305-315; the arrangement is our own.
 #pragma once
 
 #include <cmath>
@@ -89,7 +92,7 @@ struct KernelState {
     using V = typename L::V;
     // Kept for finish(): z, 1 - r, 2 r (loop radii), beta^3 and D = alpha^2 (1 + kc).
     V z_n, one_minus_r, two_r, beta3, d;
-    // Bulirsch's qc, em, g, e; the integrands' (a, b) = (a_i, b_i) / t.
+    // Bulirsch's qc, em, g, e; the two integrands' a and b, stored multiplied by t.
     V qc, em, g, e, a0, b0, a1, b1, t;
 
     // Only for points inside the kernel's range (in_kernel_range).
