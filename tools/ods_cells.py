@@ -18,11 +18,12 @@ def _q(prefix, name):
 
 
 class SavedCell:
-    __slots__ = ("formula", "value_type", "value", "text", "array_member")
+    __slots__ = ("formula", "value_type", "value", "text", "array_member", "block")
 
     def __init__(self, formula, value_type, value, text):
         self.formula, self.value_type, self.value, self.text = formula, value_type, value, text
         self.array_member = False  # inside an array formula's block (the formula is on its top-left)
+        self.block = None          # (sheet, row, col) of the top-left cell of its array formula
 
     @property
     def computed(self):
@@ -69,6 +70,9 @@ def read_cells(path):
         for r in range(row, row + nrows):
             for c in range(col, col + ncols):
                 cell = cells.get((name, r, c))
-                if cell is not None and not cell.formula:
+                if cell is None:
+                    continue
+                cell.block = (name, row, col)
+                if not cell.formula:
                     cell.array_member = True
     return cells

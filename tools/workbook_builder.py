@@ -74,11 +74,13 @@ class Sheet:
         return r
 
     def define_name(self, name, cell):
-        """A workbook-wide name for one cell, so formulas read like the design."""
-        col, row = split_cell(cell)
+        """A workbook-wide name for one cell or a range ("B4" or "J5:O6"), so formulas read
+        like the design."""
+        first = cell.split(":")[0]
+        col, row = split_cell(first)
         addr = uno.createUnoStruct("com.sun.star.table.CellAddress")
         addr.Sheet, addr.Column, addr.Row = self.book.index_of(self.name), col, row
-        absolute = "$" + re.sub(r"([A-Z]+)(\d+)", r"\1$\2", cell)
+        absolute = ":".join("$" + re.sub(r"([A-Z]+)(\d+)", r"\1$\2", part) for part in cell.split(":"))
         self.book.doc.NamedRanges.addNewByName(name, f"${self.name}.{absolute}", addr, 0)
 
     def input(self, row, label, name, number, unit, note="", fmt="0.000"):
@@ -145,14 +147,19 @@ class Sheet:
             c.IsTextWrapped = True
 
     def chart(self, name, anchor, size_mm, data_range, title, x_title, y_title, series_in_columns=True):
-        """An XY (scatter) line chart: first column x, the other columns y series, row 1 names."""
+        """An XY (scatter) line chart: first column x, the other columns y series, row 1 names.
+        data_range is one range or a list of ranges of equal height (e.g. x and a distant y column)."""
         col, row = split_cell(anchor)
         x = sum(self.sheet.Columns.getByIndex(i).Width for i in range(col))
         y = sum(self.sheet.Rows.getByIndex(i).Height for i in range(row))
         rect = Rectangle(x, y, int(size_mm[0] * 100), int(size_mm[1] * 100))
-        r = self.cell(data_range).getRangeAddress()
-        addr = CellRangeAddress(r.Sheet, r.StartColumn, r.StartRow, r.EndColumn, r.EndRow)
-        self.sheet.Charts.addNewByName(name, rect, (addr,), True, False)
+        ranges = [data_range] if isinstance(data_range, str) else list(data_range)
+        addrs = []
+        for text in ranges:  # several ranges: the first column of the first is x
+            r = self.cell(text).getRangeAddress()
+            addrs.append(CellRangeAddress(r.Sheet, r.StartColumn, r.StartRow, r.EndColumn, r.EndRow))
+        self.sheet.Charts.addNewByName(name, rect, tuple(addrs), True, False)
+        series = sum(a.EndColumn - a.StartColumn + 1 for a in addrs) - 1
         doc = self.sheet.Charts.getByName(name).EmbeddedObject
         diagram = doc.createInstance("com.sun.star.chart.XYDiagram")
         doc.setDiagram(diagram)
@@ -165,7 +172,7 @@ class Sheet:
         diagram.XAxisTitle.String = x_title
         diagram.HasYAxisTitle = True
         diagram.YAxisTitle.String = y_title
-        doc.HasLegend = r.EndColumn - r.StartColumn > 1
+        doc.HasLegend = series > 1
         position = uno.Enum("com.sun.star.chart.ChartAxisPosition", "START")
         for axis in (diagram.XAxis, diagram.YAxis):
             axis.CrossoverPosition = position  # axes at the plot's edge, not through zero

@@ -25,15 +25,28 @@ struct Arg {
     enum class Form : std::uint8_t { Missing, Scalar, Array };
     Form form = Form::Missing;
     std::size_t rows = 0, cols = 0;
-    std::vector<Cell> cells;  // 1 cell for Scalar, rows*cols for Array
+    std::vector<Cell> cells;  // rows*cols cells for Array (empty otherwise)
+    Cell value;               // the value of a Scalar, kept out of `cells`: no allocation per cell call
 
     static Arg missing() { return {}; }
-    static Arg scalar(Cell c) { return {Form::Scalar, 1, 1, {std::move(c)}}; }
+    static Arg scalar(Cell c) {
+        Arg a;
+        a.form = Form::Scalar;
+        a.rows = a.cols = 1;
+        a.value = std::move(c);
+        return a;
+    }
     static Arg number(double v) { return scalar(Cell::of(v)); }
     static Arg array(std::size_t rows, std::size_t cols, std::vector<Cell> cells) {
-        return {Form::Array, rows, cols, std::move(cells)};
+        Arg a;
+        a.form = Form::Array;
+        a.rows = rows;
+        a.cols = cols;
+        a.cells = std::move(cells);
+        return a;
     }
-    const Cell& at(std::size_t r, std::size_t c) const { return cells[r * cols + c]; }
+    // The cell at row r, column c of an Array; the value of a Scalar (any r, c).
+    const Cell& at(std::size_t r, std::size_t c) const { return form == Form::Array ? cells[r * cols + c] : value; }
 };
 
 // Spreadsheet error codes as Calc numbers them (shown as Err:502, Err:523, #VALUE!).

@@ -1,5 +1,6 @@
 #include "evaluate.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <exception>
 #include <limits>
@@ -9,6 +10,7 @@
 #include "catalogue.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/wire.hpp"
+#include "fixed_vector.hpp"
 #include "registry.hpp"
 
 namespace coilwright::sheet {
@@ -21,6 +23,9 @@ struct ElementOutcome {
     std::string message;
 };
 
+// Nonzero and below 2.2e-308 in magnitude: a number that has lost digits.
+bool is_subnormal(double v) { return v != 0.0 && std::fabs(v) < std::numeric_limits<double>::min(); }
+
 // Converts one cell of a numeric argument; returns false with a message when it is not a number.
 bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& message) {
     switch (cell.kind) {
@@ -32,7 +37,7 @@ bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& 
             }
             // A subnormal value (below 2.2e-308, reachable only through an expression) carries
             // fewer digits than any result promises; no argument has a sensible value there.
-            if (cell.number != 0.0 && std::fabs(cell.number) < std::numeric_limits<double>::min()) {
+            if (is_subnormal(cell.number)) {
                 message = std::string(spec.name) + " is a subnormal number (magnitude below 2.2e-308)";
                 return false;
             }
@@ -69,7 +74,7 @@ ElementOutcome run(const ElementFn& fn, const double* numbers) {
         if (!std::isfinite(out.value)) {
             out.error = CellError::IllegalArgument;
             out.message = "the result is not a finite number";
-        } else if (out.value != 0.0 && std::fabs(out.value) < std::numeric_limits<double>::min()) {
+        } else if (is_subnormal(out.value)) {
             // Underflow into the subnormal range loses relative precision: an error, like overflow.
             out.error = CellError::IllegalArgument;
             out.message = "the result underflows (magnitude below 2.2e-308)";
@@ -87,6 +92,69 @@ ElementOutcome run(const ElementFn& fn, const double* numbers) {
     return out;
 }
 
+// The cell of a numeric argument that element (r, c) of the result uses (broadcasting).
+const Cell& cell_of_element(const Arg& a, std::size_t r, std::size_t c) {
+    return a.form == Arg::Form::Array ? a.at(a.rows == 1 ? 0 : r, a.cols == 1 ? 0 : c) : a.value;
+}
+
+// An array formula of a function with a batch: the elements' numbers are gathered in chunks
+// and handed to the batch; the elements it leaves (NaN) are evaluated one by one with fn, and
+// elements with a bad argument cell are errors, exactly as in the element loop of evaluate().
+void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> numbers,
+                         std::span<const ArgSpec* const> number_specs, CallResult& result) {
+    constexpr std::size_t kChunk = 1024;
+    const std::size_t count = result.rows * result.cols, n_args = numbers.size();
+    std::vector<double> storage(n_args * kChunk + kChunk);  // the columns, then the batch's output
+    std::vector<unsigned char> good(kChunk);
+    const double* columns[kMaxArgs];
+    for (std::size_t k = 0; k < n_args; ++k) columns[k] = storage.data() + k * kChunk;
+    double* const out = storage.data() + n_args * kChunk;
+    std::string message;
+    std::size_t r = 0, c = 0;  // of the element at `start`
+    for (std::size_t start = 0; start < count; start += kChunk) {
+        const std::size_t m = std::min(kChunk, count - start);
+        for (std::size_t i = 0; i < m; ++i) {
+            bool ok = true;
+            for (std::size_t k = 0; k < n_args; ++k) {
+                const Cell& cell = cell_of_element(*numbers[k], r, c);
+                double v;
+                if (cell.kind == CellKind::Number && number_specs[k]->kind == ArgKind::Number &&
+                    !is_subnormal(cell.number)) {
+                    v = cell.number;  // the usual case, as to_number does it
+                } else if (!to_number(cell, *number_specs[k], v, message)) {
+                    ok = false;
+                    v = std::numeric_limits<double>::quiet_NaN();
+                }
+                storage[k * kChunk + i] = v;
+            }
+            good[i] = ok;
+            if (++c == result.cols) {
+                c = 0;
+                ++r;
+            }
+        }
+        const bool handled = prepared.batch(columns, m, out);
+        for (std::size_t i = 0; i < m; ++i) {
+            const std::size_t at = start + i;
+            if (!good[i]) {
+                result.errors[at] = CellError::IllegalArgument;
+                continue;
+            }
+            if (handled && std::isfinite(out[i]) && !is_subnormal(out[i])) {
+                result.values[at] = out[i];
+                continue;
+            }
+            double element[kMaxArgs];
+            for (std::size_t k = 0; k < n_args; ++k) element[k] = columns[k][i];
+            const ElementOutcome o = run(prepared.fn, element);
+            if (o.error != CellError::None)
+                result.errors[at] = o.error;
+            else
+                result.values[at] = o.value;
+        }
+    }
+}
+
 std::string shape_text(std::size_t rows, std::size_t cols) {
     return std::to_string(rows) + "x" + std::to_string(cols);
 }
@@ -102,12 +170,14 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     if (args.size() != spec.arg_count)
         return CallResult::failure(CellError::IllegalArgument, "wrong number of arguments");
 
+    if (spec.arg_count > kMaxArgs) return CallResult::failure(CellError::NoValue, "too many arguments");
+
     // Sort the arguments into tables (passed whole) and numbers (broadcast element-wise).
-    std::vector<const Arg*> tables;
-    std::vector<const Arg*> numbers;
-    std::vector<const ArgSpec*> number_specs;
-    std::vector<Arg> defaults;
-    defaults.reserve(spec.arg_count);
+    // Fixed capacity on the stack: a call allocates nothing but its result.
+    FixedVector<const Arg*, kMaxArgs> tables;
+    FixedVector<const Arg*, kMaxArgs> numbers;
+    FixedVector<const ArgSpec*, kMaxArgs> number_specs;
+    FixedVector<Arg, kMaxArgs> defaults;
     bool any_array = false;
     std::size_t rows = 1, cols = 1;
     for (std::size_t i = 0; i < spec.arg_count; ++i) {
@@ -155,7 +225,7 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
 
     Prepared prepared;
     try {
-        prepared = impl.prepare(tables);
+        prepared = impl.prepare(std::span<const Arg* const>(tables.data(), tables.size()));
     } catch (const ConvergenceError& e) {
         return CallResult::failure(CellError::NoConvergence, e.what());
     } catch (const std::invalid_argument& e) {
@@ -174,7 +244,13 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     result.values.assign(count, 0.0);
     result.errors.assign(count, CellError::None);
 
-    std::vector<double> element(numbers.size());
+    if (any_array && prepared.batch) {
+        evaluate_in_batches(prepared, {numbers.data(), numbers.size()}, {number_specs.data(), number_specs.size()},
+                            result);
+        return result;
+    }
+
+    double element[kMaxArgs];
     std::string message;
     for (std::size_t r = 0; r < rows; ++r) {
         for (std::size_t c = 0; c < cols; ++c) {
@@ -182,17 +258,14 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
             bool ok = true;
             for (std::size_t k = 0; k < numbers.size() && ok; ++k) {
                 const Arg& a = *numbers[k];
-                const Cell& cell = a.form == Arg::Form::Array
-                                       ? a.at(a.rows == 1 ? 0 : r, a.cols == 1 ? 0 : c)
-                                       : a.cells[0];
-                ok = to_number(cell, *number_specs[k], element[k], message);
+                ok = to_number(cell_of_element(a, r, c), *number_specs[k], element[k], message);
             }
             if (!ok) {
                 result.errors[at] = CellError::IllegalArgument;
                 if (!any_array) return CallResult::failure(CellError::IllegalArgument, message);
                 continue;
             }
-            ElementOutcome o = run(prepared.fn, element.data());
+            ElementOutcome o = run(prepared.fn, element);
             if (o.error != CellError::None) {
                 if (!any_array) return CallResult::failure(o.error, o.message);
                 result.errors[at] = o.error;

@@ -6,8 +6,10 @@
 
 namespace coilwright::sheet {
 
-Implementation numeric(const char* name, ElementFn fn, double cost) {
-    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost}; }};
+Implementation numeric(const char* name, ElementFn fn, double cost, BatchFn batch) {
+    return {name, [fn = std::move(fn), cost, batch = std::move(batch)](std::span<const Arg* const>) {
+                return Prepared{fn, cost, batch};
+            }};
 }
 
 // Declares each family's binding function and lists them (kBindings).

@@ -1,6 +1,7 @@
 // What each catalogue function computes: the bridge from spreadsheet arguments to the engine.
 #pragma once
 
+#include <cstddef>
 #include <functional>
 #include <span>
 #include <vector>
@@ -13,9 +14,17 @@ namespace coilwright::sheet {
 // order, after broadcasting. Throws the engine's errors for bad values.
 using ElementFn = std::function<double(const double* numbers)>;
 
+// Optionally evaluates many elements at once (an array formula): columns[k][i] is the k-th
+// numeric argument of element i, as fn would receive it. Returns false to leave the elements
+// to fn. Otherwise writes out[i] for every i < n: a finite value equal to what fn returns, bit
+// for bit, or NaN where it has no answer; those elements are then evaluated with fn, one by
+// one, which gives each its value or its error. Allocation-free per element, vectorisable.
+using BatchFn = std::function<bool(const double* const* columns, std::size_t n, double* out)>;
+
 struct Prepared {
     ElementFn fn;
     double cost = 1.0;  // work per element in units of one loop-field evaluation
+    BatchFn batch;      // when set, array formulas go through it first
 };
 
 // Builds the element function once per call from the table arguments (may throw).
@@ -26,8 +35,8 @@ struct Implementation {
     PrepareFn prepare;
 };
 
-// A function whose arguments are all numbers.
-Implementation numeric(const char* name, ElementFn fn, double cost = 1.0);
+// A function whose arguments are all numbers; `batch` (optional) computes arrays faster.
+Implementation numeric(const char* name, ElementFn fn, double cost = 1.0, BatchFn batch = {});
 
 // Every implementation, ordered like function_specs(); an entry whose prepare is empty has
 // no implementation (a unit test makes sure there is none).

@@ -1,5 +1,7 @@
 #include "any_conversion.hpp"
 
+#include <algorithm>
+#include <cstddef>
 #include <cstdint>
 #include <cstring>
 
@@ -39,21 +41,31 @@ sheet::Cell to_cell(const Any& v) {
 
 sheet::Arg to_arg(const Any& value) {
     if (!value.hasValue()) return sheet::Arg::missing();
-    Sequence<Sequence<Any>> range;
-    if (value.getValueTypeClass() == TypeClass_SEQUENCE && (value >>= range)) {
-        const std::size_t rows = static_cast<std::size_t>(range.getLength());
+    if (value.getValueTypeClass() != TypeClass_SEQUENCE) return sheet::Arg::scalar(to_cell(value));
+    Sequence<Sequence<Any>> range;  // built only here: even an empty one costs a type lookup
+    if (value >>= range) {
+        // Read through a const view: the non-const accessors would copy the shared sequence.
+        const Sequence<Sequence<Any>>& view = range;
+        const std::size_t rows = static_cast<std::size_t>(view.getLength());
         std::size_t cols = 0;
-        for (const auto& row : range) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
+        for (const auto& row : view) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
         std::vector<sheet::Cell> cells(rows * cols);  // ragged rows leave blanks
         for (std::size_t r = 0; r < rows; ++r) {
-            const auto& row = range[static_cast<sal_Int32>(r)];
-            for (sal_Int32 c = 0; c < row.getLength(); ++c) cells[r * cols + c] = to_cell(row[c]);
+            const auto& row = view[static_cast<sal_Int32>(r)];
+            sheet::Cell* out = cells.data() + r * cols;
+            for (sal_Int32 c = 0; c < row.getLength(); ++c) {
+                const Any& v = row[c];
+                if (v.getValueTypeClass() == TypeClass_DOUBLE) {  // the usual cell: no temporary
+                    out[c].kind = sheet::CellKind::Number;
+                    out[c].number = *static_cast<const double*>(v.getValue());
+                } else {
+                    out[c] = to_cell(v);
+                }
+            }
         }
         return sheet::Arg::array(rows, cols, std::move(cells));
     }
-    if (value.getValueTypeClass() == TypeClass_SEQUENCE)
-        return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
-    return sheet::Arg::scalar(to_cell(value));
+    return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
 }
 
 double calc_error_value(sheet::CellError error) {
@@ -67,11 +79,20 @@ Any to_any(const sheet::CallResult& result) {
     if (!result.is_array) return Any(result.values.at(0));
     Sequence<Sequence<double>> out(static_cast<sal_Int32>(result.rows));
     auto* rows = out.getArray();
+    const auto cols = static_cast<sal_Int32>(result.cols);
     for (std::size_t r = 0; r < result.rows; ++r) {
-        Sequence<double> row(static_cast<sal_Int32>(result.cols));
+        const std::size_t first = r * result.cols;
+        const bool clean = std::all_of(result.errors.begin() + static_cast<std::ptrdiff_t>(first),
+                                       result.errors.begin() + static_cast<std::ptrdiff_t>(first + result.cols),
+                                       [](sheet::CellError e) { return e == sheet::CellError::None; });
+        if (clean) {  // copied in one go
+            rows[r] = Sequence<double>(result.values.data() + first, cols);
+            continue;
+        }
+        Sequence<double> row(cols);
         double* dst = row.getArray();
         for (std::size_t c = 0; c < result.cols; ++c) {
-            const std::size_t at = r * result.cols + c;
+            const std::size_t at = first + c;
             dst[c] = result.errors[at] == sheet::CellError::None ? result.values[at]
                                                                   : calc_error_value(result.errors[at]);
         }

@@ -11,10 +11,10 @@
 #include <cppuhelper/supportsservice.hxx>
 #include <org/coilwright/XFunctions.hpp>
 
-#include <array>
 #include <exception>
 
 #include "../core/evaluate.hpp"
+#include "../core/fixed_vector.hpp"
 #include "any_conversion.hpp"
 #include "../core/catalogue.hpp"
 
@@ -47,9 +47,8 @@ private:
     uno::Any dispatch(std::size_t index, const uno::Any* const* args, std::size_t count) {
         sheet::CallResult result;
         try {
-            std::array<sheet::Arg, 16> converted;  // no function has more arguments (checked by a test)
-            if (count > converted.size()) throw std::length_error("too many arguments");
-            for (std::size_t i = 0; i < count; ++i) converted[i] = to_arg(*args[i]);
+            sheet::FixedVector<sheet::Arg, sheet::kMaxArgs> converted;  // no function has more (checked by a test)
+            for (std::size_t i = 0; i < count; ++i) converted.push_back(to_arg(*args[i]));  // throws beyond
             result = sheet::evaluate(index, {converted.data(), count});
         } catch (const std::exception& e) {
             // Nothing may escape into Calc but the exceptions it understands.

@@ -21,6 +21,7 @@
 #include "coilwright/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "loop_kernel.hpp"
 
 namespace coilwright {
 
@@ -65,16 +66,31 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     check::finite(z, "z");
     check::non_negative(r, "r");
     const double a = loop.radius;
-    const double z_n = z / a, r_n = r / a;
-    if (!std::isfinite(z_n) || !std::isfinite(r_n))
-        throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
-    const FieldRZ unit = detail::loop_field_normalized(z_n, r_n, (a - r) / a);
     const double scale = kMu0 * loop.turns * loop.current / a;
     // A prefactor in the subnormal range (radius 1e308 m, say) has lost its digits before the
     // field is formed; Br would come out as a silent 0 and Bz as a subnormal.
     if (scale != 0.0 && std::fabs(scale) < std::numeric_limits<double>::min())
         throw DomainError("the field underflows below 2.2e-308 T: the radius is too large for the ampere-turns");
-    const FieldRZ f = scale * unit;
+    // The fast kernel (shared with loop_field_batch, bit for bit) covers every point but those
+    // farther than 1e50 radii or nearer the wire than 1e-100 radii, which take the long way.
+    const double inv_a = 1.0 / a;
+    const double z_n = z * inv_a, r_n = r * inv_a, one_minus_r = (a - r) * inv_a;
+    if (!std::isfinite(z_n) || !std::isfinite(r_n))
+        throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
+    FieldRZ f;
+    if (detail::in_kernel_range<detail::ScalarLanes>(z_n, r_n, one_minus_r)) {
+        using State = detail::KernelState<detail::ScalarLanes>;
+        State s = State::start(z_n, r_n, one_minus_r);
+        int steps = 0;
+        for (; s.active(); ++steps) {
+            if (steps == detail::kMaxGaussSteps)
+                throw ConvergenceError("the elliptic-integral iteration did not converge");
+            s.step<true>(true);
+        }
+        s.finish(scale, f.bz, f.br);
+    } else {
+        f = scale * detail::loop_field_normalized(z / a, r / a, (a - r) / a);
+    }
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");
     return f;

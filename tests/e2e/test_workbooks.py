@@ -30,8 +30,21 @@ WORKBOOKS = sorted((ROOT / "sheets").glob("*.ods"))
 FORMULA = uno.Enum("com.sun.star.table.CellContentType", "FORMULA")
 
 
-def same_number(a, b, rel=1e-13):
-    return a == b or abs(a - b) <= rel * max(abs(a), abs(b))
+def same_number(a, b, rel=1e-11, scale=0.0):
+    """Equal within 1e-11 relative, plus 1e-14 of `scale` (the largest magnitude in the value's
+    array block). Saved values carry 15 significant digits, and a table of B/B0 - 1 in ppm turns
+    a last-bit change of the engine into a larger relative change near its zero; anything beyond
+    these bounds is stale."""
+    return a == b or abs(a - b) <= rel * max(abs(a), abs(b)) + 1e-14 * scale
+
+
+def block_scales(cells):
+    """Largest computed magnitude per array formula block."""
+    scales = {}
+    for cell in cells.values():
+        if cell.block is not None and cell.value_type == "float":
+            scales[cell.block] = max(scales.get(cell.block, 0.0), abs(float(cell.value)))
+    return scales
 
 
 def column_scales(cells):
@@ -72,6 +85,7 @@ class Workbooks(unittest.TestCase):
     def test_saved_values_are_current(self):
         for path in WORKBOOKS:
             saved = read_cells(path)
+            scales = block_scales(saved)
             doc = self.session.open_document(path)
             try:
                 doc.calculateAll()
@@ -87,7 +101,7 @@ class Workbooks(unittest.TestCase):
                         self.assertEqual(cell.value, value, f"{where}: saved {cell.value!r}, now {value!r}")
                     else:
                         saved_value = float(cell.value)
-                        self.assertTrue(same_number(saved_value, value),
+                        self.assertTrue(same_number(saved_value, value, scale=scales.get(cell.block, 0.0)),
                                         f"{where}: saved {saved_value!r}, now {value!r} (stale?)")
                     checked += 1
                 self.assertGreater(checked, 10, path.name)
@@ -136,7 +150,7 @@ class Workbooks(unittest.TestCase):
                             self.assertEqual(live.getError(), 0, f"{path.name} {sheet_name} {row + 1},{col + 1}")
                             if cell.computed and cell.value_type == "float":
                                 want, got = float(cell.value), live.getValue()
-                                self.assertLessEqual(abs(want - got), 1e-12 * scales[(sheet_name, col)],
+                                self.assertLessEqual(abs(want - got), 1e-11 * scales[(sheet_name, col)],
                                                      f"{path.name} {sheet_name} {row + 1},{col + 1}: {want} {got}")
                     finally:
                         doc.close(True)

@@ -1,0 +1,148 @@
+// The batch loop field gives exactly what loop_field gives, point by point, in both copies of
+// its code (baseline x86-64 and AVX2), and NaN exactly where loop_field throws.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <cstdint>
+#include <cstring>
+#include <limits>
+#include <random>
+#include <vector>
+
+#include "coilwright/errors.hpp"
+#include "coilwright/loop.hpp"
+#include "coilwright/loop_batch.hpp"
+
+using namespace coilwright;
+using detail::BatchCode;
+
+namespace {
+
+std::uint64_t bits(double x) {
+    std::uint64_t b;
+    std::memcpy(&b, &x, sizeof b);
+    return b;
+}
+
+struct Points {
+    std::vector<double> z, r;
+    void add(double zz, double rr) {
+        z.push_back(zz);
+        r.push_back(rr);
+    }
+};
+
+// Ordinary, near-axis, near-wire, far and extreme points, in loop radii; a count that is not a
+// multiple of any block size.
+Points hard_and_random_points(double a) {
+    Points p;
+    std::mt19937_64 rng(7);
+    std::uniform_real_distribution<double> u(0.0, 1.0);
+    for (int i = 0; i < 3001; ++i) {
+        switch (i % 5) {
+            case 0: p.add((6 * u(rng) - 3) * a, 3 * u(rng) * a); break;                      // around the loop
+            case 1: p.add((4 * u(rng) - 2) * a, std::pow(10.0, -12 * u(rng)) * a); break;    // near the axis
+            case 2: {                                                                         // near the wire
+                const double d = std::pow(10.0, -14 * u(rng)) * a, t = 6.283185307179586 * u(rng);
+                p.add(d * std::sin(t), a + d * std::cos(t));
+                break;
+            }
+            case 3: p.add(std::pow(10.0, 8 * u(rng)) * a * (u(rng) < 0.5 ? -1 : 1), std::pow(10.0, 8 * u(rng)) * a); break;
+            default: p.add((u(rng) - 0.5) * 1e-300, u(rng) * 1e-300); break;                // the centre, tiny
+        }
+    }
+    // Outside the fast kernel's range (it hands them to the careful path) and in error.
+    const double nan = std::numeric_limits<double>::quiet_NaN(), inf = HUGE_VAL;
+    for (double zz : {1e60 * a, -1e200, 1e-130 * a, 0.0}) p.add(zz, a);          // far away; 1e-130 radii off the wire; on it
+    for (double rr : {1e55 * a, 1e300, a * (1 + 1e-120)}) p.add(0.5 * a, rr);
+    p.add(nan, 0.1);
+    p.add(0.1, nan);
+    p.add(inf, 0.1);
+    p.add(0.1, -inf);
+    p.add(0.1, -1e-3);
+    p.add(0.1, inf);
+    p.add(-0.0, 0.0);
+    return p;
+}
+
+std::vector<BatchCode> codes() {
+    std::vector<BatchCode> out{BatchCode::Baseline};
+    if (detail::best_batch_code() == BatchCode::Avx2) out.push_back(BatchCode::Avx2);
+    return out;
+}
+
+const char* name(BatchCode c) { return c == BatchCode::Avx2 ? "AVX2" : "baseline"; }
+
+}  // namespace
+
+TEST(LoopBatch, EqualsLoopFieldBitForBitOrIsNaNWhereItThrows) {
+    for (const LoopSpec loop : {LoopSpec{0.25, 40, 1.5}, LoopSpec{1.0, 1, -1}, LoopSpec{3e-5, 7, 0.2},
+                                LoopSpec{1.0, 0, 1}, LoopSpec{0.1, 1e10, 1e300}}) {
+        const Points p = hard_and_random_points(loop.radius);
+        const std::size_t n = p.z.size();
+        for (BatchCode code : codes()) {
+            std::vector<double> bz(n), br(n);
+            const std::size_t failed =
+                detail::loop_field_batch_using(code, loop, 0.0, p.z.data(), p.r.data(), n, bz.data(), br.data(), false);
+            std::size_t throws = 0;
+            for (std::size_t i = 0; i < n; ++i) {
+                try {
+                    const FieldRZ f = loop_field(loop, p.z[i], p.r[i]);
+                    ASSERT_EQ(bits(bz[i]), bits(f.bz)) << name(code) << " z=" << p.z[i] << " r=" << p.r[i];
+                    ASSERT_EQ(bits(br[i]), bits(f.br)) << name(code) << " z=" << p.z[i] << " r=" << p.r[i];
+                } catch (const DomainError&) {
+                    ++throws;
+                    EXPECT_TRUE(std::isnan(bz[i]) && std::isnan(br[i])) << name(code) << " z=" << p.z[i];
+                }
+            }
+            EXPECT_EQ(failed, throws) << name(code);
+            EXPECT_GE(throws, 7u);  // the bad points above (and, for the huge current, overflows)
+        }
+    }
+}
+
+TEST(LoopBatch, TheDefaultEntryPointsUseTheSameCode) {
+    const LoopSpec loop{0.2, 10, 3};
+    const Points p = hard_and_random_points(loop.radius);
+    const std::size_t n = p.z.size();
+    std::vector<double> bz(n), br(n), bz_ref(n), br_ref(n);
+    loop_field_batch(loop, p.z.data(), p.r.data(), n, bz.data(), br.data());
+    detail::loop_field_batch_using(BatchCode::Baseline, loop, 0.0, p.z.data(), p.r.data(), n, bz_ref.data(),
+                                   br_ref.data(), false);
+    for (std::size_t i = 0; i < n; ++i) {
+        EXPECT_EQ(bits(bz[i]), bits(bz_ref[i]));
+        EXPECT_EQ(bits(br[i]), bits(br_ref[i]));
+    }
+}
+
+TEST(LoopBatch, AddingLoopsIsTheSumOfMovedLoops) {
+    // A Helmholtz pair as two moved loops: each point gets loop_field(z - centre) added.
+    const LoopSpec loop{0.3, 25, 2};
+    const Points p = hard_and_random_points(loop.radius);
+    const std::size_t n = p.z.size();
+    for (BatchCode code : codes()) {
+        std::vector<double> bz(n, 0.0), br(n, 0.0);
+        for (double centre : {-0.15, 0.15})
+            detail::loop_field_batch_using(code, loop, centre, p.z.data(), p.r.data(), n, bz.data(), br.data(), true);
+        for (std::size_t i = 0; i < n; ++i) {
+            try {
+                const FieldRZ lower = loop_field(loop, p.z[i] + 0.15, p.r[i]);
+                const FieldRZ upper = loop_field(loop, p.z[i] - 0.15, p.r[i]);
+                ASSERT_EQ(bits(bz[i]), bits(0.0 + lower.bz + upper.bz)) << name(code) << " z=" << p.z[i];
+                ASSERT_EQ(bits(br[i]), bits(0.0 + lower.br + upper.br)) << name(code) << " z=" << p.z[i];
+            } catch (const DomainError&) {
+                EXPECT_TRUE(std::isnan(bz[i]) && std::isnan(br[i])) << name(code) << " z=" << p.z[i];
+            }
+        }
+    }
+}
+
+TEST(LoopBatch, ABadLoopIsAnErrorAndNothingIsWritten) {
+    const double z[] = {0.1}, r[] = {0.0};
+    double bz[] = {7.0}, br[] = {7.0};
+    EXPECT_THROW(loop_field_batch({0.0, 1, 1}, z, r, 1, bz, br), DomainError);
+    EXPECT_THROW(loop_field_batch({1.0, -1, 1}, z, r, 1, bz, br), DomainError);
+    EXPECT_THROW(add_loop_field_batch({1.0, 1, 1}, std::nan(""), z, r, 1, bz, br), DomainError);
+    EXPECT_EQ(bz[0], 7.0);
+    EXPECT_EQ(loop_field_batch({1.0, 1, 1}, z, r, 0, bz, br), 0u);  // no points: nothing to do
+}
