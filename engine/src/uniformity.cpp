@@ -58,8 +58,18 @@ double first_crossing(const std::function<double(double)>& ratio, double toleran
     double lo = 0.0;
     while (lo < max_distance) {
         const double hi = lo + step(lo);
-        if (excess(hi) > 0.0) {
-            // The first crossing lies in (lo, hi]: refine it.
+        const double at_hi = excess(hi);
+        if (at_hi > 0.0) {
+            // The first crossing lies in (lo, hi]: refine it. Bisection when hi is a singular
+            // point (infinite excess), TOMS 748 otherwise.
+            if (!std::isfinite(at_hi)) {
+                double a = lo, b = hi;
+                for (int i = 0; i < 200 && b - a > 4 * std::numeric_limits<double>::epsilon() * b; ++i) {
+                    const double mid = (a + b) / 2;
+                    (excess(mid) > 0.0 ? b : a) = mid;
+                }
+                return (a + b) / 2;
+            }
             std::uintmax_t iterations = 100;
             const auto [a, b] = boost::math::tools::toms748_solve(
                 excess, lo, hi, boost::math::tools::eps_tolerance<double>(50), iterations);
