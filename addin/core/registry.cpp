@@ -7,7 +7,7 @@
 namespace coilwright::sheet {
 
 Implementation numeric(const char* name, ElementFn fn, double cost) {
-    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost}; }};
+    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost, {}}; }};
 }
 
 // Declares each family's binding function and lists them (kBindings).

@@ -13,9 +13,15 @@ namespace coilwright::sheet {
 // order, after broadcasting. Throws the engine's errors for bad values.
 using ElementFn = std::function<double(const double* numbers)>;
 
+// Computes a whole result whose shape the function decides (e.g. an n x n matrix from a
+// table), from the numeric arguments, which must then be single values. Per-cell problems go
+// in CallResult::errors; throwing fails the whole call.
+using ShapedFn = std::function<CallResult(const double* numbers)>;
+
 struct Prepared {
     ElementFn fn;
     double cost = 1.0;  // work per element in units of one loop-field evaluation
+    ShapedFn shaped;    // when set, used instead of fn: no broadcasting, one result of its own shape
 };
 
 // Builds the element function once per call from the table arguments (may throw).
