@@ -66,15 +66,46 @@ OffsetWeights offset_weights(double h1, double h2, double d, int parity) {
 
 }  // namespace
 
+namespace {
+
+// Lengths in units of the larger outer radius keep every intermediate (weights 1/(h1 h2),
+// products of extents) representable for coils from micrometres to kilometres and beyond.
+struct Normalised {
+    WindingShape w1, w2;
+    double distance, scale;
+};
+
+Normalised normalise(const WindingShape& w1, const WindingShape& w2, double distance) {
+    const double s = std::fmax(w1.outer, w2.outer);
+    return {{w1.inner / s, w1.outer / s, w1.length / s}, {w2.inner / s, w2.outer / s, w2.length / s}, distance / s, s};
+}
+
+double mutual_normalised(const WindingShape& w1, const WindingShape& w2, double distance);
+double slope_normalised(const WindingShape& w1, const WindingShape& w2, double distance);
+
+}  // namespace
+
 double winding_mutual_inductance(const WindingShape& w1, const WindingShape& w2, double distance) {
     check_pair(w1, w2, distance);
-    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
-    const double m = detail::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
-    return check::finite_result(m, "the mutual inductance");
+    const Normalised n = normalise(w1, w2, distance);
+    // M scales like a length.
+    return check::finite_result(n.scale * mutual_normalised(n.w1, n.w2, n.distance), "the mutual inductance");
 }
 
 double winding_mutual_inductance_slope(const WindingShape& w1, const WindingShape& w2, double distance) {
     check_pair(w1, w2, distance);
+    const Normalised n = normalise(w1, w2, distance);
+    return check::finite_result(slope_normalised(n.w1, n.w2, n.distance), "dM/dz");  // dimensionless in scale
+}
+
+namespace {
+
+double mutual_normalised(const WindingShape& w1, const WindingShape& w2, double distance) {
+    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
+    return detail::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
+}
+
+double slope_normalised(const WindingShape& w1, const WindingShape& w2, double distance) {
     const double h1 = w1.length, h2 = w2.length;
     const double reach = 0.5 * (h1 + h2);  // the offsets span distance -+ reach
     const double radial_gap = std::fmax(0.0, std::fmax(w1.inner, w2.inner) - std::fmin(w1.outer, w2.outer));
@@ -107,8 +138,10 @@ double winding_mutual_inductance_slope(const WindingShape& w1, const WindingShap
         }
         slope = detail::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
     }
-    return check::finite_result(slope, "dM/dz");
+    return slope;
 }
+
+}  // namespace
 
 double winding_self_inductance(const WindingShape& shape) {
     validate(shape);

@@ -50,8 +50,8 @@ class ForceFunctionsInCalc(CalcTestCase):
         p = self.value("A1", "=SOLENOID_PRESSURE(0.01;10;20000;2)")
         b = MU0 * 20000 * 2 / 10
         self.assert_rel(p, b * b / (2 * MU0), 2e-3, "long solenoid")
-        self.assertGreater(self.value("A2", "=SOLENOID_PRESSURE(0.05;0.05;100;2)"),
-                           (MU0 * 100 * 2 / 0.05) ** 2 / (2 * MU0))  # short: larger than B^2/2mu0
+        short = self.value("A2", "=SOLENOID_PRESSURE(0.05;0.05;100;2)")
+        self.assertTrue(0 < short < (MU0 * 100 * 2 / 0.05) ** 2 / (2 * MU0))  # weaker field inside
 
     def test_bad_input_gives_error_cells(self):
         for text in ("=LOOP_FZ(0.1;1;1;0.1;1;1;0)", "=LOOP_FZ(0;1;1;0.1;1;1;1)", "=LOOP_FZ(0.1;-1;1;0.1;1;1;1)",

@@ -157,8 +157,8 @@ def main():
     for index, (label, w1, w2, d, what) in enumerate(CASES):
         if only and index not in only:
             continue
-        coarse = Pair(w1, w2, d, what == "slope", 14, 36).value()
-        fine = Pair(w1, w2, d, what == "slope", 18, 44).value()
+        coarse = Pair(w1, w2, d, what == "slope", 14, 44).value()
+        fine = Pair(w1, w2, d, what == "slope", 18, 52).value()
         diff = abs(coarse - fine) / abs(fine)
         print(index, label, what, np.format_float_scientific(fine, 19), f"refinement changed it by {float(diff):.1e}",
               flush=True)
