@@ -75,7 +75,11 @@ std::vector<Implementation> inductance_functions() {
                     return coupling(m, loop_self_inductance(a[0], a[1], 1.0), loop_self_inductance(a[2], a[3], 1.0));
                 },
                 kLoopCost),
-        numeric("COIL_L", [](const double* a) { return a[3] * a[3] * winding_self_inductance(winding(a)); },
+        numeric("COIL_L",
+                [](const double* a) {
+                    check::non_negative(a[3], "turns");
+                    return a[3] * a[3] * winding_self_inductance(winding(a));
+                },
                 kWindingCost),
         numeric("COIL_M",
                 [](const double* a) {

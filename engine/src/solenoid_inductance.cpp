@@ -19,6 +19,7 @@
 #include "coilwright/bulirsch_cel.hpp"
 #include "coilwright/checks.hpp"
 #include "coilwright/constants.hpp"
+#include "coilwright/errors.hpp"
 #include "coilwright/self_inductance.hpp"
 
 namespace coilwright {
@@ -58,6 +59,7 @@ SheetTerms sheet_terms(double radius, double length) {
     t.d = std::hypot(2.0 * radius, length);
     t.k = 2.0 * radius / t.d;
     t.x = length / t.d;
+    if (!(t.x > 0.0)) throw DomainError("length is too small against the radius (below 1e-300 of it)");
     t.k_minus_e = cel(t.x, 1.0, 0.0, 1.0);
     if (t.x < kSeriesBelow) {
         t.e_minus_1 = e_minus_one_over_x2_series(t.x);

@@ -7,6 +7,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "coilwright/loop.hpp"
 #include "coilwright/mutual_inductance.hpp"
 #include "reference_csv.hpp"
 
@@ -99,4 +100,12 @@ TEST(LoopMutual, BadArgumentsAndCoincidenceAreErrors) {
     EXPECT_THROW(loop_mutual_inductance_slope(1, 1, 0.0), SingularPointError);
     EXPECT_NO_THROW(loop_mutual_inductance(1, 1 + 1e-15, 0.0));
     EXPECT_GT(loop_mutual_inductance(1e-300, 1e-300, 1e-300), 0.0);  // tiny but finite
+}
+
+TEST(LoopMutual, UnderflowingModulusIsAnErrorNotAHang) {
+    // 4.9e-324 (the smallest double) makes kc = alpha / beta underflow to 0, where Bulirsch's
+    // iteration would never end. Found by the bad-input lists; it also affected the loop field.
+    EXPECT_THROW(loop_mutual_inductance(1, 1, 4.9e-324), SingularPointError);
+    EXPECT_THROW(loop_field({1, 1, 1}, 4.9e-324, 1.0), SingularPointError);
+    EXPECT_GT(loop_mutual_inductance(1, 1, 1e-300), 0.0);
 }

@@ -110,4 +110,5 @@ TEST(SolenoidInductance, BadArgumentsAreErrors) {
     EXPECT_THROW(solenoid_inductance(1, 1, 1e300), DomainError);  // overflows: an error, not inf
     EXPECT_THROW(solenoid_mean_pressure(1, 1, 1, HUGE_VAL), DomainError);
     EXPECT_THROW(nagaoka_coefficient(0), DomainError);
+    EXPECT_THROW(solenoid_inductance(1e200, 1e-200, 1), DomainError);  // l/d underflows: no hang
 }

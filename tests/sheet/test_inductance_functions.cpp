@@ -54,6 +54,7 @@ TEST(InductanceFunctions, CoilLBroadcastsOverARange) {
     ASSERT_TRUE(r.is_array);
     EXPECT_EQ(r.values[1], 2500 * winding_self_inductance({0.1, 0.12, 0.05}));
     EXPECT_EQ(r.errors[2], CellError::IllegalArgument);
+    EXPECT_EQ(call("COIL_L", {n(0.1), n(0.12), n(0.02), n(-50)}).error, CellError::IllegalArgument);  // N^2 hides the sign
 }
 
 TEST(InductanceFunctions, StackMatrixHasItsOwnShapeAndErrorCells) {

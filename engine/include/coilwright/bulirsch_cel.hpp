@@ -17,12 +17,15 @@
 #include <cstddef>
 
 #include "coilwright/constants.hpp"
+#include "coilwright/errors.hpp"
 
 namespace coilwright {
 
 // Relative gap between successive arithmetic and geometric means at which the loop stops.
 // The iteration converges quadratically, so the error left is of the order of its square.
 inline constexpr double kCelTolerance = 1e-9;
+// Far more Gauss steps than any representable modulus needs (about 10 for kc = 1e-300).
+inline constexpr int kCelMaxSteps = 64;
 
 // The loop state for N integrands that share kc and p (a and b differ). State names follow
 // Bulirsch's paper: qc the current modulus, em the running mean, e = qc * em.
@@ -35,9 +38,12 @@ struct CelLoop {
     double e;   // qc * em of the previous stage
     std::array<double, N> a, b;
 
-    // Runs the remaining Gauss steps and returns the N integrals.
+    // Runs the remaining Gauss steps and returns the N integrals. A complementary modulus that
+    // underflowed to 0 (a point within 1e-308 of a filament) would never converge: refused.
     std::array<double, N> finish() {
-        while (std::fabs(g - qc) > g * kCelTolerance) {
+        if (!(qc > 0.0)) throw SingularPointError("too close to a current filament to be represented");
+        for (int steps = 0; std::fabs(g - qc) > g * kCelTolerance; ++steps) {
+            if (steps == kCelMaxSteps) throw ConvergenceError("elliptic integral did not converge");
             qc = 2.0 * std::sqrt(e);
             e = qc * em;
             step();
