@@ -159,6 +159,38 @@ std::string shape_text(std::size_t rows, std::size_t cols) {
     return std::to_string(rows) + "x" + std::to_string(cols);
 }
 
+// A function that returns its own shape (Prepared::shaped): numeric arguments are single values.
+CallResult evaluate_shaped(const Prepared& prepared, std::span<const Arg* const> numbers,
+                           std::span<const ArgSpec* const> number_specs, bool any_array, const char* name) {
+    if (any_array)
+        return CallResult::failure(CellError::IllegalArgument,
+                                   std::string(name) + " takes single values, not ranges, besides its table");
+    std::vector<double> values(numbers.size());
+    std::string message;
+    for (std::size_t k = 0; k < numbers.size(); ++k)
+        if (!to_number(cell_of_element(*numbers[k], 0, 0), *number_specs[k], values[k], message))
+            return CallResult::failure(CellError::IllegalArgument, message);
+    CallResult result;
+    try {
+        result = prepared.shaped(values.data());
+    } catch (const ConvergenceError& e) {
+        return CallResult::failure(CellError::NoConvergence, e.what());
+    } catch (const std::invalid_argument& e) {
+        return CallResult::failure(CellError::IllegalArgument, e.what());
+    } catch (const std::exception& e) {
+        return CallResult::failure(CellError::NoValue, e.what());
+    }
+    if (result.error != CellError::None) return result;
+    const std::size_t count = result.rows * result.cols;
+    if (count == 0 || count > kMaxResultCells || result.values.size() != count || result.errors.size() != count)
+        return CallResult::failure(CellError::NoValue, std::string(name) + " produced a malformed result");
+    result.is_array = true;
+    for (std::size_t i = 0; i < count; ++i)  // no non-finite number reaches a cell
+        if (result.errors[i] == CellError::None && (!std::isfinite(result.values[i]) || is_subnormal(result.values[i])))
+            result.errors[i] = CellError::IllegalArgument;
+    return result;
+}
+
 }  // namespace
 
 CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
@@ -236,6 +268,11 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     if (prepared.cost * static_cast<double>(count) > kMaxWorkPerCall)
         return CallResult::failure(CellError::IllegalArgument,
                                    "this call asks for too much work for one formula; split the range");
+
+    if (prepared.shaped)
+        return evaluate_shaped(prepared, std::span<const Arg* const>(numbers.data(), numbers.size()),
+                               std::span<const ArgSpec* const>(number_specs.data(), number_specs.size()), any_array,
+                               spec.name);
 
     CallResult result;
     result.is_array = any_array;

@@ -8,7 +8,7 @@ namespace coilwright::sheet {
 
 Implementation numeric(const char* name, ElementFn fn, double cost, BatchFn batch) {
     return {name, [fn = std::move(fn), cost, batch = std::move(batch)](std::span<const Arg* const>) {
-                return Prepared{fn, cost, batch};
+                return Prepared{fn, cost, batch, {}};
             }};
 }
 

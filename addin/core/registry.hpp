@@ -20,11 +20,16 @@ using ElementFn = std::function<double(const double* numbers)>;
 // for bit, or NaN where it has no answer; those elements are then evaluated with fn, one by
 // one, which gives each its value or its error. Allocation-free per element, vectorisable.
 using BatchFn = std::function<bool(const double* const* columns, std::size_t n, double* out)>;
+// Computes a whole result whose shape the function decides (e.g. an n x n matrix from a
+// table), from the numeric arguments, which must then be single values. Per-cell problems go
+// in CallResult::errors; throwing fails the whole call.
+using ShapedFn = std::function<CallResult(const double* numbers)>;
 
 struct Prepared {
     ElementFn fn;
     double cost = 1.0;  // work per element in units of one loop-field evaluation
     BatchFn batch;      // when set, array formulas go through it first
+    ShapedFn shaped;    // when set, used instead of fn: no broadcasting, one result of its own shape
 };
 
 // Builds the element function once per call from the table arguments (may throw).

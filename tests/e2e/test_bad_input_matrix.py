@@ -10,6 +10,10 @@ ranges give errors (or are computed) without hanging; LibreOffice stays up; and 
 afterwards gives exactly the same value. A catalogue function without cases FAILS the run, so a
 new function cannot slip through. Many formulas go into one sheet per function and are
 calculated together, so the whole matrix costs one LibreOffice start.
+
+Keys of a case besides good, bad and bad_calls: "text": True for a function that returns text;
+"shaped": True for one whose result has its own shape (single values besides its table);
+"table_row_arg": i when argument i numbers the rows of the table by position in the range.
 """
 import importlib.util
 import math
@@ -230,7 +234,17 @@ class BadInputMatrix(CalcTestCase):
             blank, zero = (self.outcome(sheet.getCellByPosition(col, 2)) for col in (3, 4))
             self.assertEqual(blank, zero, f"{name}: {fn['args'][i]['name']} as a blank cell and as 0")
         # Each numeric argument as a column holding the valid value, a blank, text and an error.
+        # A function whose result has its own shape (an inductance matrix) takes single values
+        # only: a range there must fail the whole call.
         column = 6
+        if case.get("shaped"):
+            for i in numeric:
+                args = list(good)
+                args[i] = f"({{1;1}}*({good[i]}))"
+                c = sheet.getCellByPosition(column, 0)
+                c.setFormula(call(name, args))
+                self.assertEqual(self.outcome(c)[0], "error", f"{name}: a range for {fn['args'][i]['name']}")
+            numeric = []
         for i in numeric:
             data_col, out_col = column, column + 1
             cells = [good[i], None, '"abc"', "=1/0"]

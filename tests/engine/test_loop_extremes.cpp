@@ -51,8 +51,9 @@ TEST(LoopExtremes, FieldScaleThatUnderflowsIsAnError) {
 }
 
 TEST(LoopExtremes, CelIterationIsBoundedOutsideItsDomain) {
-    // kc = 0 is outside cel's domain; the loop must stop with an error instead of spinning.
-    EXPECT_THROW(cel(0.0, 1.0, 1.0, 1.0), ConvergenceError);
+    // kc = 0 (or NaN) is outside cel's domain; it must be an error instead of spinning forever.
+    EXPECT_THROW(cel(0.0, 1.0, 1.0, 1.0), DomainError);
+    EXPECT_THROW(cel(std::nan(""), 1.0, 1.0, 1.0), DomainError);
     // The smallest positive kc is inside it and converges within the bound.
     EXPECT_TRUE(std::isfinite(cel(std::numeric_limits<double>::denorm_min(), 1.0, 1.0, 1.0)));
 }

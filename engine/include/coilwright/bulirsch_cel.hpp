@@ -24,7 +24,6 @@ namespace coilwright {
 // Relative gap between successive arithmetic and geometric means at which the loop stops.
 // The iteration converges quadratically, so the error left is of the order of its square.
 inline constexpr double kCelTolerance = 1e-9;
-
 // From the smallest positive double the means agree to kCelTolerance within 15 steps; a loop
 // that runs longer was started outside the domain (qc = 0 or NaN) and must not spin forever.
 inline constexpr int kCelMaxSteps = 64;
@@ -40,10 +39,12 @@ struct CelLoop {
     double e;   // qc * em of the previous stage
     std::array<double, N> a, b;
 
-    // Runs the remaining Gauss steps and returns the N integrals.
+    // Runs the remaining Gauss steps and returns the N integrals. A complementary modulus that
+    // underflowed to 0 (a point within 1e-308 of a filament) would never converge: refused.
     std::array<double, N> finish() {
+        if (!(qc > 0.0)) throw SingularPointError("too close to a current filament to be represented");
         for (int steps = 0; std::fabs(g - qc) > g * kCelTolerance; ++steps) {
-            if (steps == kCelMaxSteps) throw ConvergenceError("elliptic integral: the Gauss iteration did not converge");
+            if (steps == kCelMaxSteps) throw ConvergenceError("elliptic integral did not converge");
             qc = 2.0 * std::sqrt(e);
             e = qc * em;
             step();
