@@ -37,7 +37,7 @@ std::vector<Implementation> sensitivity_functions() {
                                         : uniform_length_sensitivity(*table, index, parameter, a[3], a[4]);
                  };
                  // A uniform-region sensitivity runs about five region searches.
-                 return Prepared{fn, 15000.0 * static_cast<double>(table->size())};
+                 return Prepared{fn, 15000.0 * static_cast<double>(table->size()), {}, {}};
              }}};
 }
 

@@ -18,7 +18,7 @@ Implementation on_table(const char* name, F per_element, double cost_per_row) {
     return {name, [per_element, cost_per_row](std::span<const Arg* const> tables) {
                 auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
                 return Prepared{[table, per_element](const double* a) { return per_element(*table, a); },
-                                cost_per_row * static_cast<double>(table->size())};
+                                cost_per_row * static_cast<double>(table->size()), {}, {}};
             }};
 }
 

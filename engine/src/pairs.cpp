@@ -35,7 +35,7 @@ double first_sign_change(const CoilShape& coil, std::size_t k) {
     double lo = start;
     const double limit = 100.0 * (coil.outer_radius + coil.length);
     while (lo < limit) {
-        const double hi = lo + axial_scan_step(table, lo);
+        const double hi = lo + axial_scan_step(table, lo, lo);
         if (std::copysign(1.0, derivative(hi)) != sign0) {
             std::uintmax_t iterations = 100;
             const auto [a, b] = boost::math::tools::toms748_solve(

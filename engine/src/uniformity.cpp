@@ -41,15 +41,16 @@ double search_limit(const CoilTable& table, double z0) {
 
 }  // namespace
 
-double axial_scan_step(const CoilTable& table, double z) {
+double axial_scan_step(const CoilTable& table, double z, double travelled) {
     // Near the windings the on-axis field varies on the scale of the smallest radius; far away
-    // on the scale of the distance itself.
+    // on the scale of the distance itself. Growing with the distance travelled bounds the
+    // number of steps by about 64 ln(range / smallest radius).
     const TableScale s = scale_of(table);
     const double near_step = s.smallest_radius / 256.0;
     double distance = std::numeric_limits<double>::infinity();
     for (const CoilRow& row : table.rows())
         distance = std::min(distance, std::max(0.0, std::fabs(z - row.centre_z) - row.length / 2));
-    return std::max(near_step, distance / 64.0);
+    return std::max({near_step, distance / 64.0, travelled / 64.0});
 }
 
 double first_crossing(const std::function<double(double)>& ratio, double tolerance,
@@ -89,7 +90,7 @@ double axial_uniform_half_length(const CoilTable& table, double tolerance, doubl
     double half = std::numeric_limits<double>::infinity();
     for (double direction : {+1.0, -1.0}) {
         const auto ratio = [&](double s) { return axial_field(table, z0 + direction * s) / b0; };
-        const auto step = [&](double s) { return axial_scan_step(table, z0 + direction * s); };
+        const auto step = [&](double s) { return axial_scan_step(table, z0 + direction * s, s); };
         half = std::min(half, first_crossing(ratio, tolerance, step, limit));
     }
     return half;
@@ -105,7 +106,7 @@ double axial_linear_half_length(const CoilTable& table, double tolerance, double
     double half = std::numeric_limits<double>::infinity();
     for (double direction : {+1.0, -1.0}) {
         const auto ratio = [&](double s) { return gradient(z0 + direction * s) / g0; };
-        const auto step = [&](double s) { return axial_scan_step(table, z0 + direction * s); };
+        const auto step = [&](double s) { return axial_scan_step(table, z0 + direction * s, s); };
         half = std::min(half, first_crossing(ratio, tolerance, step, limit));
     }
     return half;

@@ -120,8 +120,10 @@ TEST(WindingInductance, ForceEqualsFiniteDifferencesOfM) {
     // of COIL_M.
     const WindingShape a{1, 1.5, 0.5}, b{0.8, 1.2, 0.3}, s{0.9, 0.9, 0.7}, f{0.5, 1.0, 0};
     double worst = 0;
-    for (auto [w1, w2] : {std::pair{a, b}, std::pair{a, s}, std::pair{b, f}, std::pair{s, f}, std::pair{a, a}})
+    for (const auto& pair : {std::pair{a, b}, std::pair{a, s}, std::pair{b, f}, std::pair{s, f}, std::pair{a, a}})
         for (double d : {0.05, 0.37, 0.9, 2.5}) {
+            // Named copies: clang 14 cannot capture structured bindings in a lambda.
+            const WindingShape w1 = pair.first, w2 = pair.second;
             const double fd = derivative([&](double x) { return winding_mutual_inductance(w1, w2, x); }, d, 1e-3);
             const double e = std::fabs(winding_mutual_inductance_slope(w1, w2, d) - fd) / std::fabs(fd);
             EXPECT_LT(e, 2e-8) << d;

@@ -22,7 +22,10 @@ double axial_uniform_half_length(const CoilTable& table, double tolerance, doubl
 // tolerance of its value at z0 (the linear region of a gradient coil).
 double axial_linear_half_length(const CoilTable& table, double tolerance, double z0);
 
-// A step length that resolves the on-axis field of the table near s (distance from z0).
-double axial_scan_step(const CoilTable& table, double z);
+// A step length that resolves the on-axis field of the table at z, having travelled
+// `travelled` from the start of the scan. Steps grow in proportion to the distance from the
+// windings and from the start, so a scan takes at most a few thousand steps whatever the
+// proportions of the coils.
+double axial_scan_step(const CoilTable& table, double z, double travelled);
 
 }  // namespace coilwright
