@@ -1,0 +1,49 @@
+// Thin current-sheet solenoid (a single-layer winding idealised as a sheet) anywhere in space.
+#pragma once
+
+#include "coilwright/field.hpp"
+
+namespace coilwright {
+
+// N turns spread evenly over `length` on a cylinder of radius `radius`, centred at z = 0, axis z.
+struct SolenoidSpec {
+    double radius;   // m, > 0
+    double length;   // m, > 0
+    double turns;    // >= 0
+    double current;  // A, any sign
+};
+
+// Field at axial position z (m) and distance r >= 0 (m) from the axis: inside, outside, near the
+// ends and close to the sheet. Throws DomainError for bad arguments and SingularPointError for a
+// point on the sheet (r == radius, |z| <= length / 2), where Bz jumps and the rims are singular.
+// Relative accuracy about 1e-14 per component; near a zero of Bz (outside the winding, beyond
+// the ends) Bz is accurate relative to |B| instead.
+FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r);
+
+void validate(const SolenoidSpec& solenoid);
+
+namespace detail {
+
+// Which field components a kernel computes (the other is returned as 0).
+enum class Components { Both, Axial, Radial };
+
+// Unchecked kernel in units of the sheet radius: a sheet of radius 1 and half-length h, field
+// in units of mu0 n I (n turns per unit length). `one_minus_r` = 1 - r passed exactly.
+// `max_loss` bounds the digits the closed form may lose to cancellation between the two ends
+// (a factor); beyond it the loop field is integrated along the sheet instead. Throws
+// SingularPointError on the sheet.
+FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h, double max_loss = 4.0,
+                               Components want = Components::Both);
+
+// End functions of the sheet (radius 1, field point at axial distance zeta >= 0 from one end):
+// with G(zeta) = integral_0^zeta Bz_loop ds (odd in zeta) and the solid angle of the end disk,
+//   inside_part(zeta, r)  = G(zeta)       for r < 1   (the solenoid's own field, positive)
+//   disk_part(zeta, r)    = Omega / 4 pi  for any r  (equals 1/2 - G for r <= 1, -G for r > 1)
+//   vector_part(zeta, r)  = -integral of Br_loop, i.e. Br = vector_part(lo) - vector_part(hi)
+double inside_part(double zeta, double r, double one_minus_r);
+double disk_part(double zeta, double r, double one_minus_r);
+double vector_part(double zeta, double r, double one_minus_r);
+
+}  // namespace detail
+
+}  // namespace coilwright
