@@ -56,7 +56,8 @@ namespace detail {
 
 namespace {
 
-// Below this k^2 the split form of W (item 2) loses more than a few ulps; the direct sum is used.
+// The split form of W (item 2) loses about a factor 10 / k^2 (measured); below this k^2 the direct
+// sum is used for full precision. Callers that accept a loss L use min(kSplitMinK2, 10 / L).
 constexpr double kSplitMinK2 = 0.7;
 // The trapezoidal sum uses N >= this / strip width points (error ~ exp(-N width)).
 constexpr double kTrapezoidExponent = 40.0;
@@ -64,10 +65,19 @@ constexpr double kTrapezoidExponent = 40.0;
 constexpr double kInsideLimit = 0.375;
 // Gauss-Legendre replaces the closed form only where it converges quickly.
 constexpr double kMinQuadratureRho = 3.0;
-// Beyond this rho the closed form would lose more than the usual max_loss anyway: skip it.
-constexpr double kDirectQuadratureRho = 64.0;
+// Where centre / half-width of the integration interval exceeds this times max_loss, the closed
+// form would lose more than max_loss (its loss is about centre / (2 half-width)): skip it.
+constexpr double kDirectQuadratureLoss = 4.0;
 
 constexpr double kInvPi = 1.0 / kPi;
+
+// sqrt(x^2 + y^2) without the cost of glibc's hypot, which falls back where squares could
+// overflow or underflow (about a third of the kernel's time otherwise).
+inline double norm2(double x, double y) {
+    const double m = std::max(std::fabs(x), std::fabs(y));
+    if (m < 1e150 && m > 1e-150) return std::sqrt(x * x + y * y);
+    return std::hypot(x, y);
+}
 
 template <int N>
 const std::array<double, N / 2 + 1>& half_period_cosines() {
@@ -97,10 +107,10 @@ double solid_angle_sum(double zeta_over_s, double r_over_s, double t) {
 // W = Omega / (4 pi) by the direct sum; needs r^2 + zeta^2 > r (true wherever it is used).
 double disk_part_by_sum(double zeta, double r) {
     if (r == 0.0) {
-        const double R = std::hypot(1.0, zeta);
+        const double R = norm2(1.0, zeta);
         return 0.5 / (R * (R + zeta));  // on the axis: (1 - zeta / R) / 2 without cancellation
     }
-    const double s = std::hypot(r, zeta);
+    const double s = norm2(r, zeta);
     const double t = 1.0 / s;
     const double strip = std::acosh(0.5 * (s / r) * (s + t));  // acosh((1 + s^2) / (2 r))
     const double needed = kTrapezoidExponent / strip;
@@ -120,77 +130,119 @@ struct EndGeometry {
 };
 
 EndGeometry end_geometry(double zeta, double r, double one_minus_r) {
-    const double alpha = std::hypot(one_minus_r, zeta);
-    const double beta = std::hypot(1.0 + r, zeta);
+    const double alpha = norm2(one_minus_r, zeta);
+    const double beta = norm2(1.0 + r, zeta);
     if (alpha == 0.0) throw SingularPointError("the point lies on the rim of the current sheet");
     return {beta, alpha / beta, zeta / beta, (4.0 * r / beta) / beta};
 }
 
-// G for r <= 1 (item 2's positive case): cel(kc, g^2, 1, g) with g = gamma > 0.
-double inside_term(double zeta, double r, double one_minus_r) {
-    if (zeta == 0.0) return 0.0;
-    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
-    if (one_minus_r == 0.0) {
-        // r = 1: the limit gamma -> 0+ of the Derby-Olbert form, 1/4 + kc K(kc) / (2 pi).
-        return 0.25 + e.kc * cel(e.kc, 1.0, 1.0, 1.0) * (0.5 * kInvPi);
-    }
-    // First Gauss step by hand from p = g, a = 1, b / p = 1: every term stays positive.
-    const double g = one_minus_r / (1.0 + r);
-    CelLoop<1> s{};
-    s.qc = e.kc;
-    s.p = g + e.kc / g;
-    s.g = 1.0;
-    s.em = 1.0 + e.kc;
-    s.e = e.kc;
-    s.a = {1.0 + 1.0 / g};
-    s.b = {2.0 * (1.0 + e.kc / g)};
-    return e.zeta_over_beta * kInvPi / (1.0 + r) * s.finish()[0];
-}
+// Bulirsch's iteration (bulirsch_cel.hpp) for N integrands that share kc, each with its own p:
+// the two end terms of one end share the costly part (one square root per step).
+template <std::size_t N>
+struct CelShared {
+    double qc, em, g, e;
+    std::array<double, N> p, a, b;
 
-// W for r > 1 by the split form of item 2 (requires k^2 not small).
-double disk_term_outside_split(double r, double one_minus_r, const EndGeometry& e) {
-    const double g = -one_minus_r / (1.0 + r);  // -gamma > 0
-    const double delta = 2.0 / (1.0 + r);       // 1 - g, exact
+    // The state after the first Gauss step done by hand, for modulus kc.
+    explicit CelShared(double kc) : qc(kc), em(1.0 + kc), g(1.0), e(kc), p{}, a{}, b{} {}
+
+    std::array<double, N> finish() {
+        while (std::fabs(g - qc) > g * kCelTolerance) {
+            qc = 2.0 * std::sqrt(e);
+            e = qc * em;
+            for (std::size_t i = 0; i < N; ++i) {
+                const double inv_p = 1.0 / p[i], ge = e * inv_p, f = a[i];
+                a[i] += b[i] * inv_p;
+                b[i] = 2.0 * (b[i] + f * ge);
+                p[i] += ge;
+            }
+            g = em;
+            em += qc;
+        }
+        std::array<double, N> out{};
+        for (std::size_t i = 0; i < N; ++i) out[i] = kHalfPi * (b[i] + a[i] * em) / (em * (em + p[i]));
+        return out;
+    }
+    // -cel(kc, 1, 1, -1) / k^2: after the first step a = 0, b = 2 / (1 + kc), p = 1 + kc (item 1).
+    void set_vector(std::size_t i, double kc) {
+        p[i] = 1.0 + kc;
+        a[i] = 0.0;
+        b[i] = 2.0 / (1.0 + kc);
+    }
+};
+
+// The two end terms at axial distance zeta >= 0 from one end of the unit sheet:
+//   axial  = G (the sheet's own field) for r <= 1, W = Omega / (4 pi) for r > 1;
+//   vector = A, with Br = A(lo) - A(hi).
+struct EndTerms {
+    double axial = 0.0, vector = 0.0;
+};
+
+EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, bool want_vector,
+                   double min_split_k2) {
+    want_vector = want_vector && r > 0.0;
+    if (zeta == 0.0) want_axial = false;  // G(0) = 0, and W(0) = 0 outside the radius
+    EndTerms out;
+    if (!want_axial && !want_vector) return out;
+    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
     const double kc = e.kc;
-    const double kc_minus_g = ((4.0 * r / (1.0 + r)) * (e.zeta_over_beta * e.zeta_over_beta) / (1.0 + r)) / (kc + g);
-    CelLoop<2> s{};
-    s.qc = kc;
-    s.p = g + kc / g;
-    s.g = 1.0;
-    s.em = 1.0 + kc;
-    s.e = kc;
-    s.a = {1.0, 0.0};
-    s.b = {0.0, 1.0};
-    const auto [X, Y] = s.finish();
-    return e.zeta_over_beta * kInvPi / (1.0 + r) * (delta * X - 2.0 * kc_minus_g * Y) / g;
+    const double prefactor = e.zeta_over_beta * kInvPi / (1.0 + r);
+    const double vector_scale = e.k2 * kInvPi / e.beta;
+
+    if (want_axial && one_minus_r > 0.0) {
+        // G = prefactor * cel(kc, g^2, 1, g), g = gamma > 0, first Gauss step by hand from
+        // p = g, a = 1, b / p = 1: every term stays positive.
+        const double g = one_minus_r / (1.0 + r);
+        CelShared<2> c(kc);
+        c.p[0] = g + kc / g;
+        c.a[0] = 1.0 + 1.0 / g;
+        c.b[0] = 2.0 * (1.0 + kc / g);
+        c.set_vector(1, kc);
+        const auto v = c.finish();
+        out.axial = prefactor * v[0];
+        if (want_vector) out.vector = vector_scale * v[1];
+        return out;
+    }
+    if (want_axial && one_minus_r == 0.0) {
+        // r = 1: the limit gamma -> 0+ of the Derby-Olbert form, G = 1/4 + kc K(kc) / (2 pi);
+        // K = cel(kc, 1, 1, 1) after its first step shares p = 1 + kc with A.
+        CelShared<2> c(kc);
+        c.p[0] = 1.0 + kc;
+        c.a[0] = 2.0;
+        c.b[0] = 2.0 * (1.0 + kc);
+        c.set_vector(1, kc);
+        const auto v = c.finish();
+        out.axial = 0.25 + kc * v[0] * (0.5 * kInvPi);
+        if (want_vector) out.vector = vector_scale * v[1];
+        return out;
+    }
+    if (want_axial && e.k2 >= min_split_k2) {
+        // W for r > 1 by the split form of item 2: X and Y share p = g + kc / g.
+        const double g = -one_minus_r / (1.0 + r);  // -gamma > 0
+        const double delta = 2.0 / (1.0 + r);       // 1 - g, exact
+        const double kc_minus_g = ((4.0 * r / (1.0 + r)) * (e.zeta_over_beta * e.zeta_over_beta) / (1.0 + r)) / (kc + g);
+        CelShared<3> c(kc);
+        c.p[0] = c.p[1] = g + kc / g;
+        c.a[0] = 1.0;
+        c.b[1] = 1.0;
+        c.set_vector(2, kc);
+        const auto v = c.finish();
+        out.axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
+        if (want_vector) out.vector = vector_scale * v[2];
+        return out;
+    }
+    if (want_axial) out.axial = disk_part_by_sum(zeta, r);  // r > 1, far along the axis direction
+    if (want_vector) {
+        CelShared<1> c(kc);
+        c.set_vector(0, kc);
+        out.vector = vector_scale * c.finish()[0];
+    }
+    return out;
 }
 
 // W for r <= 1 given G there.
-double disk_term_inside(double zeta, double r, double inside) {
+double disk_from_inside(double zeta, double r, double inside) {
     return inside <= kInsideLimit ? 0.5 - inside : disk_part_by_sum(zeta, r);
-}
-
-double disk_term(double zeta, double r, double one_minus_r) {
-    if (zeta == 0.0) return one_minus_r > 0.0 ? 0.5 : (one_minus_r < 0.0 ? 0.0 : 0.25);
-    if (one_minus_r >= 0.0) return disk_term_inside(zeta, r, inside_term(zeta, r, one_minus_r));
-    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
-    if (e.k2 < kSplitMinK2) return disk_part_by_sum(zeta, r);
-    return disk_term_outside_split(r, one_minus_r, e);
-}
-
-double vector_term(double zeta, double r, double one_minus_r) {
-    if (r == 0.0) return 0.0;
-    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
-    // -cel(kc, 1, 1, -1) / k^2 after the first Gauss step: a = 0, b = 2 / (1 + kc).
-    CelLoop<1> s{};
-    s.qc = e.kc;
-    s.p = 1.0 + e.kc;
-    s.g = 1.0;
-    s.em = 1.0 + e.kc;
-    s.e = e.kc;
-    s.a = {0.0};
-    s.b = {2.0 / (1.0 + e.kc)};
-    return e.k2 * s.finish()[0] * kInvPi / e.beta;
 }
 
 // A difference of two end terms; the loss is max(|terms|) / |difference|.
@@ -203,23 +255,6 @@ Difference difference(double first, double second) {
     return {v, v == 0.0 ? HUGE_VAL : big / std::fabs(v)};
 }
 
-// Bz between the end planes: two terms of one sign, nothing cancels.
-double bz_between_ends(double z, double r, double one_minus_r, double h) {
-    if (one_minus_r > 0.0) return inside_term(h + z, r, one_minus_r) + inside_term(h - z, r, one_minus_r);
-    return -(disk_term(h + z, r, one_minus_r) + disk_term(h - z, r, one_minus_r));
-}
-
-// Bz beyond an end (z >= h): the difference of the end terms, in whichever form is smaller.
-Difference bz_beyond_ends(double z, double r, double one_minus_r, double h) {
-    const double near_end = z - h, far_end = z + h;
-    if (one_minus_r > 0.0) {
-        const double g1 = inside_term(near_end, r, one_minus_r), g2 = inside_term(far_end, r, one_minus_r);
-        if (g2 <= 0.5 - g1) return difference(g2, g1);
-        return difference(disk_term_inside(near_end, r, g1), disk_term_inside(far_end, r, g2));
-    }
-    return difference(disk_term(near_end, r, one_minus_r), disk_term(far_end, r, one_minus_r));
-}
-
 // The loop field integrated over u in [centre - half_width, centre + half_width].
 FieldRZ integrate_loop(double centre, double half_width, double r, double one_minus_r) {
     const double rho = bernstein_rho(centre, half_width, {0.0, std::fabs(one_minus_r)});
@@ -229,55 +264,82 @@ FieldRZ integrate_loop(double centre, double half_width, double r, double one_mi
 
 }  // namespace
 
-double inside_part(double zeta, double r, double one_minus_r) { return inside_term(zeta, r, one_minus_r); }
-double disk_part(double zeta, double r, double one_minus_r) { return disk_term(zeta, r, one_minus_r); }
-double vector_part(double zeta, double r, double one_minus_r) { return vector_term(zeta, r, one_minus_r); }
+double inside_part(double zeta, double r, double one_minus_r) {
+    return end_terms(zeta, r, one_minus_r, true, false, kSplitMinK2).axial;
+}
+
+double disk_part(double zeta, double r, double one_minus_r) {
+    if (zeta == 0.0) return one_minus_r > 0.0 ? 0.5 : (one_minus_r < 0.0 ? 0.0 : 0.25);
+    const double axial = end_terms(zeta, r, one_minus_r, true, false, kSplitMinK2).axial;
+    return one_minus_r >= 0.0 ? disk_from_inside(zeta, r, axial) : axial;
+}
+
+double vector_part(double zeta, double r, double one_minus_r) {
+    return end_terms(zeta, r, one_minus_r, false, true, kSplitMinK2).vector;
+}
 
 FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h, double max_loss, Components want) {
     const double sign = z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
     z = std::fabs(z);
     if (one_minus_r == 0.0 && z <= h) throw SingularPointError("the point lies on the current sheet");
     const std::complex<double> pole{0.0, std::fabs(one_minus_r)};
+    const bool inside_radius = one_minus_r >= 0.0;
+    const double min_split_k2 = std::min(kSplitMinK2, 10.0 / max_loss);
 
-    // Gauss-Legendre over the whole sheet, shared by Bz and Br beyond the ends.
-    bool have_whole = false;
-    FieldRZ whole{};
-    const auto whole_sheet = [&] {
-        if (!have_whole) whole = integrate_loop(z, h, r, one_minus_r);
-        have_whole = true;
-        return whole;
+    // Bz integrates Bz_loop over u in [z - h, z + h]; Br the odd Br_loop, of which only
+    // [|z - h|, z + h] survives. Both use the end terms at zeta = |z - h| and z + h. The
+    // cancellation between them grows like centre / (2 half-width) of those intervals (away
+    // from a zero of the field): far beyond that the closed form is not even tried.
+    const bool between = z < h;
+    const bool want_bz = want != Components::Radial, want_br = want != Components::Axial && z > 0.0 && r > 0.0;
+    const double br_centre = between ? h : z, br_half = between ? z : h;
+    const double direct_ratio = 1.0 / (kDirectQuadratureLoss * max_loss);
+    bool bz_quadrature = want_bz && !between && h < direct_ratio * z;
+    bool br_quadrature = want_br && br_half < direct_ratio * br_centre;
+    const auto quadrature_pays = [&](double centre, double half) {
+        return bernstein_rho(centre, half, pole) > kMinQuadratureRho;
     };
 
-    double bz = 0.0;
-    if (want != Components::Radial) {
-        if (z < h) {
-            bz = bz_between_ends(z, r, one_minus_r, h);
-        } else {
-            const double rho = bernstein_rho(z, h, pole);
-            bool quadrature = rho >= kDirectQuadratureRho;
-            if (!quadrature) {
-                const Difference d = bz_beyond_ends(z, r, one_minus_r, h);
+    double bz = 0.0, br = 0.0;
+    const bool closed_bz = want_bz && !bz_quadrature, closed_br = want_br && !br_quadrature;
+    if (closed_bz || closed_br) {
+        const double zeta_near = between ? h - z : z - h, zeta_far = z + h;
+        const EndTerms near = end_terms(zeta_near, r, one_minus_r, closed_bz, closed_br, min_split_k2);
+        const EndTerms far = end_terms(zeta_far, r, one_minus_r, closed_bz, closed_br, min_split_k2);
+        if (closed_bz) {
+            if (between) {
+                // Between the end planes: two terms of one sign, nothing cancels.
+                bz = inside_radius ? near.axial + far.axial : -(near.axial + far.axial);
+            } else {
+                // Beyond an end: the difference of the end terms, in whichever form is smaller.
+                Difference d{};
+                if (!inside_radius) {
+                    d = difference(near.axial, far.axial);
+                } else if (far.axial <= 0.5 - near.axial) {
+                    d = difference(far.axial, near.axial);
+                } else {
+                    d = difference(disk_from_inside(zeta_near, r, near.axial), disk_from_inside(zeta_far, r, far.axial));
+                }
                 bz = d.value;
-                quadrature = d.loss > max_loss && rho > kMinQuadratureRho;
+                bz_quadrature = d.loss > max_loss && quadrature_pays(z, h);
             }
-            if (quadrature) bz = whole_sheet().bz;
         }
-    }
-
-    double br = 0.0;  // exactly zero on the axis and in the mid-plane (symmetry)
-    if (want != Components::Axial && z > 0.0 && r > 0.0) {
-        // Br integrates the odd Br_loop over [z - h, z + h]; what survives is [lo, hi].
-        const double centre = z < h ? h : z, half_width = z < h ? z : h;
-        const double rho = bernstein_rho(centre, half_width, pole);
-        bool quadrature = rho >= kDirectQuadratureRho;
-        if (!quadrature) {
-            const Difference d = difference(vector_term(centre - half_width, r, one_minus_r),
-                                            vector_term(centre + half_width, r, one_minus_r));
+        if (closed_br) {
+            const Difference d = difference(near.vector, far.vector);
             br = d.value;
-            quadrature = d.loss > max_loss && rho > kMinQuadratureRho;
+            br_quadrature = d.loss > max_loss && quadrature_pays(br_centre, br_half);
         }
-        if (quadrature) br = z < h ? integrate_loop(centre, half_width, r, one_minus_r).br : whole_sheet().br;
     }
+    // Where the ends cancel, the loop field integrated along the sheet instead.
+    if (want_bz && bz_quadrature) {
+        const FieldRZ whole = integrate_loop(z, h, r, one_minus_r);
+        bz = whole.bz;
+        if (want_br && br_quadrature && !between) {
+            br = whole.br;
+            br_quadrature = false;
+        }
+    }
+    if (want_br && br_quadrature) br = integrate_loop(br_centre, br_half, r, one_minus_r).br;
     return {bz, sign * br};
 }
 

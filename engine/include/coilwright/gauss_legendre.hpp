@@ -15,12 +15,13 @@
 namespace coilwright::detail {
 
 // Bernstein parameter rho >= 1 of the ellipse through `pole` for the interval
-// [centre - half_width, centre + half_width].
+// [centre - half_width, centre + half_width]: with the foci at the ends, the ellipse through w
+// has semi-major axis A = (|w - 1| + |w + 1|) / 2 and rho = A + sqrt(A^2 - 1).
 inline double bernstein_rho(double centre, double half_width, std::complex<double> pole) {
-    const std::complex<double> w = (pole - centre) / half_width;
-    if (std::abs(w) > 1e8) return 2.0 * std::abs(w);  // far away: rho ~ 2|w|, and no overflow
-    const std::complex<double> s = std::sqrt(w - 1.0) * std::sqrt(w + 1.0);
-    return std::max(std::abs(w + s), std::abs(w - s));
+    const double x = (pole.real() - centre) / half_width, y = std::fabs(pole.imag() / half_width);
+    if (!(std::fabs(x) < 1e150 && y < 1e150)) return 1e150;  // far away (and no overflow below)
+    const double A = 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
+    return A + std::sqrt((A - 1.0) * (A + 1.0));
 }
 
 // Points needed for rho^(-2n) <= 1e-20: the margin below double precision absorbs the growth
