@@ -57,8 +57,9 @@ def load(idl_dir):
             kind = arg.setdefault("kind", "number")
             if kind not in KINDS:
                 sys.exit(f"catalogue: {fn['name']}.{arg['name']}: unknown kind {kind}")
-            if arg["name"] in IDL_KEYWORDS or not arg["name"].isidentifier():
-                sys.exit(f"catalogue: {fn['name']}: bad argument name {arg['name']}")
+            # unoidl-write accepts letters and digits only in parameter names (no '_').
+            if arg["name"] in IDL_KEYWORDS or not arg["name"].isalnum() or not arg["name"][0].isalpha():
+                sys.exit(f"catalogue: {fn['name']}: bad argument name {arg['name']} (letters and digits only)")
             if arg["name"] in arg_names:
                 sys.exit(f"catalogue: {fn['name']}: duplicate argument {arg['name']}")
             arg_names.add(arg["name"])
@@ -72,6 +73,9 @@ def load(idl_dir):
         for key in ("group", "returns", "summary", "accuracy"):
             if not fn.get(key):
                 sys.exit(f"catalogue: {fn['name']}: missing {key}")
+        # returns = "text": the result is one text value (no broadcasting), so every argument is a table.
+        if fn["returns"] == "text" and any(arg["kind"] != "table" for arg in fn["args"]):
+            sys.exit(f"catalogue: {fn['name']}: a text result needs table arguments only")
     return data
 
 
@@ -112,7 +116,8 @@ def gen_specs(data):
     out.append("")
     out.append("const FunctionSpec kFunctionSpecs[] = {")
     for fn in data["function"]:
-        out.append(f"    {{{cxx_string(fn['name'])}, kArgs_{fn['name']}, {len(fn['args'])}}},")
+        text = ", true" if fn["returns"] == "text" else ""
+        out.append(f"    {{{cxx_string(fn['name'])}, kArgs_{fn['name']}, {len(fn['args'])}{text}}},")
     out.append("};")
     return "\n".join(out) + "\n"
 

@@ -7,7 +7,11 @@
 namespace coilwright::sheet {
 
 Implementation numeric(const char* name, ElementFn fn, double cost) {
-    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost}; }};
+    return {name, [fn = std::move(fn), cost](std::span<const Arg* const>) { return Prepared{fn, cost, {}}; }};
+}
+
+Implementation text_result(const char* name, TextFn fn) {
+    return {name, [fn = std::move(fn)](std::span<const Arg* const> tables) { return Prepared{{}, 0.0, fn(tables)}; }};
 }
 
 // Declares each family's binding function and lists them (kBindings).

@@ -3,6 +3,7 @@
 
 #include <functional>
 #include <span>
+#include <string>
 #include <vector>
 
 #include "cells.hpp"
@@ -16,6 +17,7 @@ using ElementFn = std::function<double(const double* numbers)>;
 struct Prepared {
     ElementFn fn;
     double cost = 1.0;  // work per element in units of one loop-field evaluation
+    std::string text;   // the result of a function that returns text (no ElementFn then)
 };
 
 // Builds the element function once per call from the table arguments (may throw).
@@ -28,6 +30,10 @@ struct Implementation {
 
 // A function whose arguments are all numbers.
 Implementation numeric(const char* name, ElementFn fn, double cost = 1.0);
+
+// A function returning one text value from its table arguments (returns = "text").
+using TextFn = std::function<std::string(std::span<const Arg* const> tables)>;
+Implementation text_result(const char* name, TextFn fn);
 
 // Every implementation, ordered like function_specs(); an entry whose prepare is empty has
 // no implementation (a unit test makes sure there is none).

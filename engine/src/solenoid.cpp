@@ -345,7 +345,7 @@ FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h,
 
 }  // namespace detail
 
-FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r) {
+FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r, Components want) {
     validate(solenoid);
     check::finite(z, "z");
     check::non_negative(r, "r");
@@ -353,7 +353,7 @@ FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r) {
     const double z_n = z / a, r_n = r / a, h_n = 0.5 * solenoid.length / a;
     if (!std::isfinite(z_n) || !std::isfinite(r_n) || !std::isfinite(h_n))
         throw DomainError("the point or the length is too large compared with the radius");
-    const FieldRZ unit = detail::sheet_field_normalized(z_n, r_n, (a - r) / a, h_n);
+    const FieldRZ unit = detail::sheet_field_normalized(z_n, r_n, (a - r) / a, h_n, 4.0, want);
     const double scale = kMu0 * (solenoid.turns / solenoid.length) * solenoid.current;
     const FieldRZ f = scale * unit;
     check::finite_result(f.bz, "Bz");

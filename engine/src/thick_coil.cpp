@@ -72,16 +72,16 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
 
 }  // namespace detail
 
-FieldRZ thick_coil_field(const ThickCoilSpec& coil, double z, double r) {
+FieldRZ thick_coil_field(const ThickCoilSpec& coil, double z, double r, Components want) {
     validate(coil);
     check::finite(z, "z");
     check::non_negative(r, "r");
     if (coil.outer_radius == coil.inner_radius)
-        return solenoid_field({coil.inner_radius, coil.length, coil.turns, coil.current}, z, r);
+        return solenoid_field({coil.inner_radius, coil.length, coil.turns, coil.current}, z, r, want);
     const double a1 = coil.inner_radius, a2 = coil.outer_radius, h = 0.5 * coil.length;
     // Current density times mu0; the radial integral carries the unit of length.
     const double mu0_j = kMu0 * coil.turns * coil.current / ((a2 - a1) * coil.length);
-    const FieldRZ unit = detail::thick_field_per_density(a1, a2, h, z, r);
+    const FieldRZ unit = detail::thick_field_per_density(a1, a2, h, z, r, want);
     const FieldRZ f = mu0_j * unit;
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");

@@ -5,6 +5,9 @@
 
 namespace coilwright {
 
+// Which field components to compute (the other is returned as 0): saves work for Bz or Br alone.
+enum class Components { Both, Axial, Radial };
+
 // N turns spread evenly over `length` on a cylinder of radius `radius`, centred at z = 0, axis z.
 struct SolenoidSpec {
     double radius;   // m, > 0
@@ -18,14 +21,11 @@ struct SolenoidSpec {
 // point on the sheet (r == radius, |z| <= length / 2), where Bz jumps and the rims are singular.
 // Relative accuracy about 1e-14 per component; near a zero of Bz (outside the winding, beyond
 // the ends) Bz is accurate relative to |B| instead.
-FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r);
+FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r, Components want = Components::Both);
 
 void validate(const SolenoidSpec& solenoid);
 
 namespace detail {
-
-// Which field components a kernel computes (the other is returned as 0).
-enum class Components { Both, Axial, Radial };
 
 // Unchecked kernel in units of the sheet radius: a sheet of radius 1 and half-length h, field
 // in units of mu0 n I (n turns per unit length). `one_minus_r` = 1 - r passed exactly.

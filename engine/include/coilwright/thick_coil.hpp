@@ -21,7 +21,7 @@ struct ThickCoilSpec {
 // field is finite and computed. Relative accuracy about 1e-12 (1e-10 guaranteed), relative to
 // |B| where a component changes sign. With inner == outer the coil is a thin sheet and a point
 // on the sheet is a SingularPointError.
-FieldRZ thick_coil_field(const ThickCoilSpec& coil, double z, double r);
+FieldRZ thick_coil_field(const ThickCoilSpec& coil, double z, double r, Components want = Components::Both);
 
 void validate(const ThickCoilSpec& coil);
 
