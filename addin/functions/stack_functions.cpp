@@ -33,8 +33,11 @@ const char* kind_name(CoilRow::Kind kind, bool plural) {
     return "";
 }
 
-// "OK: 3 coils (2 loops, 1 thick coil)", or the reader's message for the first bad row.
+// "OK: 3 coils (2 loops, 1 thick coil)", or the reader's message for the first bad row. A
+// single value instead of a range is no table to explain: an error cell, like any bad argument.
 std::string check_table(std::span<const Arg* const> tables) {
+    if (tables[0]->form == Arg::Form::Scalar)
+        throw DomainError("coils must be a range (or an inline array) of 6 columns");
     try {
         const CoilTable table = read_coil_table(*tables[0]);
         const CoilRow::Kind kinds[] = {CoilRow::Kind::Loop, CoilRow::Kind::ThinSolenoid, CoilRow::Kind::FlatSpiral,

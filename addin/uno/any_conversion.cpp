@@ -21,6 +21,8 @@ sheet::Cell to_cell(const Any& v) {
         case TypeClass_STRING: {
             rtl::OUString s;
             v >>= s;
+            // Calc passes the blank cells of a range as empty strings (checked with LibreOffice 7.4).
+            if (s.isEmpty()) return {};
             return sheet::Cell::of_text(rtl::OUStringToOString(s, RTL_TEXTENCODING_UTF8).getStr());
         }
         case TypeClass_DOUBLE:

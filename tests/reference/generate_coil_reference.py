@@ -62,6 +62,22 @@ def breakpoints(lo, hi, centre, scales):
     return sorted(pts)
 
 
+def loop_field_near(r, da, dz):
+    """loop_field(r + da, dz, r) with the loop-to-point offsets (da, dz) given exactly."""
+    a = r + da
+    alpha2 = da * da + dz * dz
+    beta2 = (a + r) ** 2 + dz * dz
+    beta = mp.sqrt(beta2)
+    # K and E from the complementary parameter kc^2 = alpha^2 / beta^2 (DLMF 19.25.1), which
+    # stays exact where m = 1 - kc^2 would round to 1 next to the wire.
+    kc2, m = alpha2 / beta2, 4 * a * r / beta2
+    K = mp.elliprf(0, kc2, 1)
+    E = K - m / 3 * mp.elliprd(0, kc2, 1)
+    bz = ((a * a - r * r - dz * dz) * E + alpha2 * K) / (2 * mp.pi * alpha2 * beta)
+    br = dz * ((a * a + r * r + dz * dz) * E - alpha2 * K) / (2 * mp.pi * alpha2 * beta * r)
+    return bz, br
+
+
 def thick_by_sheets(a1, a2, length, n, i, z, r):
     with mp.workdps(DPS):
         a1, a2, length, n, i, z, r = map(mp.mpf, (a1, a2, length, n, i, z, r))
@@ -85,12 +101,31 @@ def thick_check(a1, a2, length, n, i, z, r):
         a1, a2, length, n, i, z, r = map(mp.mpf, (a1, a2, length, n, i, z, r))
         h = length / 2
         s = mp.mpf(MU0) * n * i / ((a2 - a1) * length)
-        a_pts = breakpoints(a1, a2, r, [abs(z - h), abs(z + h)])
-        z_pts = lambda a: breakpoints(-h, h, z, [abs(a - r)])
+        gl = "gauss-legendre"
         out = []
         for comp in (0, 1):
-            inner = lambda a: mp.quad(lambda zp: loop_field(a, z - zp, r)[comp], z_pts(a), method="gauss-legendre")
-            out.append(s * mp.quad(inner, a_pts, method="gauss-legendre"))
+            f = lambda a, zp: loop_field(a, z - zp, r)[comp]
+            if a1 <= r <= a2 and -h <= z <= h:
+                # The loop field is singular like 1 / distance at (a, z') = (r, z), inside or on the
+                # edge of the cross-section: split it into triangles with that vertex and map each
+                # to a square (M. G. Duffy, SIAM J. Numer. Anal. 19, 1260, 1982), where the
+                # Jacobian's factor u cancels the singularity.
+                corners = [(a1, -h), (a2, -h), (a2, h), (a1, h)]
+                total = mp.mpf(0)
+                for k in range(4):
+                    (x1, y1), (x2, y2) = corners[k], corners[(k + 1) % 4]
+                    jac = abs((x1 - r) * (y2 - y1) - (y1 - z) * (x2 - x1))
+                    if jac == 0:
+                        continue  # the point lies on this edge
+                    # Offsets from the singular point passed exactly, so that tiny u never rounds to it.
+                    g = lambda u, v: u * loop_field_near(r, u * (x1 + v * (x2 - x1) - r), -u * (y1 + v * (y2 - y1) - z))[comp]
+                    # u log u terms remain at u = 0: tanh-sinh there, Gauss-Legendre along v.
+                    total += jac * mp.quad(lambda u: mp.quad(lambda v: g(u, v), [0, 1], method=gl), [0, 1])
+                out.append(s * total)
+            else:
+                a_pts = breakpoints(a1, a2, r, [abs(z - h), abs(z + h)])
+                z_pts = lambda a: breakpoints(-h, h, z, [abs(a - r)])
+                out.append(s * mp.quad(lambda a: mp.quad(lambda zp: f(a, zp), z_pts(a), method=gl), a_pts, method=gl))
         return "2-D quadrature of the loop field", out[0], out[1]
 
 

@@ -101,6 +101,10 @@ TEST(FieldFunctions, StackCheckSaysOkOrNamesTheFirstBadRow) {
     EXPECT_EQ(call("STACK_CHECK", {table({text_row})}).text, "row 1: turns is text, not a number");
     EXPECT_EQ(call("STACK_CHECK", {table({kBlank})}).text, "the coil table has no rows");
     EXPECT_NE(call("STACK_CHECK", {Arg::array(1, 4, numbers({1, 1, 0, 0}))}).text.find("6 columns"), std::string::npos);
+    // A single value is no table: an error cell, like a missing argument.
+    EXPECT_EQ(call("STACK_CHECK", {Arg::scalar(Cell::of_text("A1:F3"))}).error, CellError::IllegalArgument);
+    EXPECT_EQ(call("STACK_CHECK", {Arg::number(3)}).error, CellError::IllegalArgument);
+    EXPECT_EQ(call("STACK_CHECK", {Arg::missing()}).error, CellError::IllegalArgument);
 }
 
 TEST(FieldFunctions, WorkOfOneCallIsBounded) {
