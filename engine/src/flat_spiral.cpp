@@ -30,6 +30,8 @@ FieldRZ flat_spiral_field(const FlatSpiralSpec& spiral, double z, double r) {
     const double a1 = spiral.inner_radius, a2 = spiral.outer_radius;
     if (a1 == a2) return loop_field({a1, spiral.turns, spiral.current}, z, r);
     if (z == 0.0 && r >= a1 && r <= a2) throw SingularPointError("the point lies on the flat winding");
+    if (!std::isfinite(z / a1) || !std::isfinite(r / a1))
+        throw DomainError("the point is too far away compared with the inner radius");
     const auto loop = [&](double a, double a_minus_r) {
         return (1.0 / a) * detail::loop_field_normalized(z / a, r / a, a_minus_r / a);
     };
