@@ -29,6 +29,8 @@
 //     sheet by Gauss-Legendre, with the node count set by the Bernstein ellipse through the
 //     nearest singularity z' = z +- i |1 - r|. Br is odd in u, so for |z| < h only
 //     [h - |z|, h + |z|] remains, which keeps Br relative near the mid-plane as well.
+// Near a rim the field changes on the scale of the distance to it, so 1 - r and |z| - h are formed
+// from the unscaled inputs (SheetPoint), where they are exact, before anything else.
 // The algebra of 2 and 3 is our own arrangement; tests check every branch against mpmath.
 #include "coilwright/solenoid.hpp"
 
@@ -71,8 +73,8 @@ constexpr double kDirectQuadratureLoss = 4.0;
 
 constexpr double kInvPi = 1.0 / kPi;
 
-// sqrt(x^2 + y^2) without the cost of glibc's hypot, which falls back where squares could
-// overflow or underflow (about a third of the kernel's time otherwise).
+// sqrt(x^2 + y^2) without the cost of glibc's hypot (a third of the kernel's time); hypot only
+// where the squares could overflow or underflow.
 inline double norm2(double x, double y) {
     const double m = std::max(std::fabs(x), std::fabs(y));
     if (m < 1e150 && m > 1e-150) return std::sqrt(x * x + y * y);
@@ -278,10 +280,11 @@ double vector_part(double zeta, double r, double one_minus_r) {
     return end_terms(zeta, r, one_minus_r, false, true, kSplitMinK2).vector;
 }
 
-FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h, double max_loss, Components want) {
-    const double sign = z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
-    z = std::fabs(z);
-    if (one_minus_r == 0.0 && z <= h) throw SingularPointError("the point lies on the current sheet");
+FieldRZ sheet_field_normalized(const SheetPoint& p, double max_loss, Components want) {
+    const double sign = p.z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
+    const double z = std::fabs(p.z), r = p.r, one_minus_r = p.one_minus_r, h = p.h;
+    const double beyond = p.beyond_end;  // |z| - h, exact
+    if (one_minus_r == 0.0 && beyond <= 0.0) throw SingularPointError("the point lies on the current sheet");
     const std::complex<double> pole{0.0, std::fabs(one_minus_r)};
     const bool inside_radius = one_minus_r >= 0.0;
     const double min_split_k2 = std::min(kSplitMinK2, 10.0 / max_loss);
@@ -290,7 +293,7 @@ FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h,
     // [|z - h|, z + h] survives. Both use the end terms at zeta = |z - h| and z + h. The
     // cancellation between them grows like centre / (2 half-width) of those intervals (away
     // from a zero of the field): far beyond that the closed form is not even tried.
-    const bool between = z < h;
+    const bool between = beyond < 0.0;
     const bool want_bz = want != Components::Radial, want_br = want != Components::Axial && z > 0.0 && r > 0.0;
     const double br_centre = between ? h : z, br_half = between ? z : h;
     const double direct_ratio = 1.0 / (kDirectQuadratureLoss * max_loss);
@@ -303,7 +306,7 @@ FieldRZ sheet_field_normalized(double z, double r, double one_minus_r, double h,
     double bz = 0.0, br = 0.0;
     const bool closed_bz = want_bz && !bz_quadrature, closed_br = want_br && !br_quadrature;
     if (closed_bz || closed_br) {
-        const double zeta_near = between ? h - z : z - h, zeta_far = z + h;
+        const double zeta_near = std::fabs(beyond), zeta_far = z + h;
         const EndTerms near = end_terms(zeta_near, r, one_minus_r, closed_bz, closed_br, min_split_k2);
         const EndTerms far = end_terms(zeta_far, r, one_minus_r, closed_bz, closed_br, min_split_k2);
         if (closed_bz) {
@@ -353,7 +356,7 @@ FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r, Compone
     const double z_n = z / a, r_n = r / a, h_n = 0.5 * solenoid.length / a;
     if (!std::isfinite(z_n) || !std::isfinite(r_n) || !std::isfinite(h_n))
         throw DomainError("the point or the length is too large compared with the radius");
-    const FieldRZ unit = detail::sheet_field_normalized(z_n, r_n, (a - r) / a, h_n, 4.0, want);
+    const FieldRZ unit = detail::sheet_field_normalized(detail::SheetPoint::of(z, r, a, 0.5 * solenoid.length), 4.0, want);
     const double scale = kMu0 * (solenoid.turns / solenoid.length) * solenoid.current;
     const FieldRZ f = scale * unit;
     check::finite_result(f.bz, "Bz");

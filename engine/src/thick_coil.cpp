@@ -62,8 +62,9 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
         if (z < h || std::fabs(t1) <= kAxisMaxLoss * std::fabs(diff)) return {0.5 * diff, 0.0};
         // Far out on the axis the two ends cancel: integrate the sheets instead (below).
     }
+    const double beyond = z - h;  // exact where it matters (z close to h)
     const auto sheet = [&](double a, double a_minus_r) {
-        return sheet_field_normalized(z / a, r / a, a_minus_r / a, h / a, kSheetMaxLoss, want);
+        return sheet_field_normalized(SheetPoint{z / a, r / a, a_minus_r / a, h / a, beyond / a}, kSheetMaxLoss, want);
     };
     const RadialSingularities sing{r, {std::fabs(z - h), z + h}, 2};
     const FieldRZ f = integrate_over_radius(sheet, a1, a2, sing);

@@ -114,6 +114,8 @@ class FieldFunctionsInCalc(CalcTestCase):
         # The same tables are error cells for the field functions.
         self.assert_error("=STACK_BZ({0.1;0.1;0;0;10;1|0.2;0.1;0;0;10;1};0)")
         self.assert_error("=STACK_CHECK(5)")
+        self.assert_error('=STACK_CHECK("A1:F3")')
+        self.assert_error("=STACK_CHECK()")
         self.assert_error("=STACK_CHECK(1/0)", ERR_DIV_ZERO)
 
     def test_bad_inputs_give_error_cells(self):

@@ -121,6 +121,9 @@ def cases():
     # A realistic winding: 50 mm radius, 200 mm long, 500 turns at 2 A; and large/small scales.
     for z, r in ((0, 0), (0.05, 0.03), (0.12, 0.04), (0.1, 0.05 + 1e-4), (-0.3, 0.2), (0.0, 0.049999)):
         out.append(("winding", 0.05, 0.2, 500, 2.0, z, r))
+    # Within nanometres of a rim of the 50 mm winding: |z| - L/2 and r - a must keep their digits.
+    for z, r in ((0.1 + 1e-9, 0.05 + 1e-9), (0.1 - 1e-9, 0.05 + 2e-9), (-0.1 - 3e-10, 0.05 - 1e-9), (0.1 + 2e-9, 0.05)):
+        out.append(("winding near rim", 0.05, 0.2, 500, 2.0, z, r))
     out += [("negative current", 0.05, 0.2, 500, -2.0, 0.08, 0.02), ("tiny", 2e-6, 1e-5, 30, 0.01, 3e-6, 1e-6),
             ("large", 30.0, 60.0, 2000, 500.0, 25.0, 28.0)]
     # Where Bz changes sign outside the sheet: compared against |B| there.
