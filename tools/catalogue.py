@@ -76,6 +76,9 @@ def load(idl_dir):
         for key in ("group", "returns", "summary", "accuracy"):
             if not fn.get(key):
                 sys.exit(f"catalogue: {fn['name']}: missing {key}")
+        # returns = "text": the result is one text value (no broadcasting), so every argument is a table.
+        if fn["returns"] == "text" and any(arg["kind"] != "table" for arg in fn["args"]):
+            sys.exit(f"catalogue: {fn['name']}: a text result needs table arguments only")
     return data
 
 
@@ -172,7 +175,8 @@ def gen_specs(data):
     out.append("")
     out.append("const FunctionSpec kFunctionSpecs[] = {")
     for fn in data["function"]:
-        out.append(f"    {{{cxx_string(fn['name'])}, kArgs_{fn['name']}, {len(fn['args'])}}},")
+        text = ", true" if fn["returns"] == "text" else ""
+        out.append(f"    {{{cxx_string(fn['name'])}, kArgs_{fn['name']}, {len(fn['args'])}{text}}},")
     out.append("};")
     return "\n".join(out) + "\n"
 

@@ -42,6 +42,7 @@ struct FunctionSpec {
     const char* name;
     const ArgSpec* args;
     std::size_t arg_count;
+    bool text_result = false;  // returns = "text" in the catalogue: one text value
 };
 
 std::span<const FunctionSpec> function_specs();

@@ -62,6 +62,8 @@ struct CallResult {
     CellError error = CellError::None;
     std::string message;
 
+    bool is_text = false;            // true: one text value in `text` (functions returning text)
+    std::string text;                // UTF-8
     bool is_array = false;           // false: one value in values[0]
     std::size_t rows = 1, cols = 1;
     std::vector<double> values;      // row-major

@@ -265,6 +265,12 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     } catch (const std::exception& e) {
         return CallResult::failure(CellError::NoValue, e.what());
     }
+    if (spec.text_result) {
+        CallResult text;
+        text.is_text = true;
+        text.text = std::move(prepared.text);
+        return text;
+    }
     if (prepared.cost * static_cast<double>(count) > kMaxWorkPerCall)
         return CallResult::failure(CellError::IllegalArgument,
                                    "this call asks for too much work for one formula; split the range");

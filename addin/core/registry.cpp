@@ -12,6 +12,15 @@ Implementation numeric(const char* name, ElementFn fn, double cost, BatchFn batc
             }};
 }
 
+Implementation text_result(const char* name, TextFn fn) {
+    return {name, [fn = std::move(fn)](std::span<const Arg* const> tables) {
+                Prepared p;
+                p.cost = 0.0;
+                p.text = fn(tables);
+                return p;
+            }};
+}
+
 // Declares each family's binding function and lists them (kBindings).
 #include "bindings.inc"
 

@@ -4,6 +4,7 @@
 #include <cstddef>
 #include <functional>
 #include <span>
+#include <string>
 #include <vector>
 
 #include "cells.hpp"
@@ -30,6 +31,7 @@ struct Prepared {
     double cost = 1.0;  // work per element in units of one loop-field evaluation
     BatchFn batch;      // when set, array formulas go through it first
     ShapedFn shaped;    // when set, used instead of fn: no broadcasting, one result of its own shape
+    std::string text;   // the result of a function that returns text (no ElementFn then)
 };
 
 // Builds the element function once per call from the table arguments (may throw).
@@ -42,6 +44,10 @@ struct Implementation {
 
 // A function whose arguments are all numbers; `batch` (optional) computes arrays faster.
 Implementation numeric(const char* name, ElementFn fn, double cost = 1.0, BatchFn batch = {});
+
+// A function returning one text value from its table arguments (returns = "text").
+using TextFn = std::function<std::string(std::span<const Arg* const> tables)>;
+Implementation text_result(const char* name, TextFn fn);
 
 // Every implementation, ordered like function_specs(); an entry whose prepare is empty has
 // no implementation (a unit test makes sure there is none).

@@ -76,6 +76,7 @@ double calc_error_value(sheet::CellError error) {
 }
 
 Any to_any(const sheet::CallResult& result) {
+    if (result.is_text) return Any(rtl::OUString::fromUtf8(result.text.c_str()));
     if (!result.is_array) return Any(result.values.at(0));
     Sequence<Sequence<double>> out(static_cast<sal_Int32>(result.rows));
     auto* rows = out.getArray();

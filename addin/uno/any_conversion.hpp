@@ -11,8 +11,8 @@ namespace coilwright::uno_glue {
 // sequence< sequence< any > >.
 sheet::Arg to_arg(const css::uno::Any& value);
 
-// A double for one value, or sequence< sequence< double > > with error elements encoded as
-// Calc's error NaNs. Whole-call failures are thrown by the caller, not converted here.
+// A double for one value, a string for a text result, or sequence< sequence< double > > with
+// error elements encoded as Calc's error NaNs. Whole-call failures are thrown by the caller.
 css::uno::Any to_any(const sheet::CallResult& result);
 
 // Calc's in-band error value: a quiet NaN whose low 32 bits carry the error number

@@ -38,7 +38,7 @@ TEST(SolenoidInductance, AgreesWithMpmathFromRibbonToNeedle) {
 TEST(SolenoidInductance, NagaokaTable1909) {
     // Nagaoka's coefficient against diameter/length, 4 decimals as tabulated by H. Nagaoka (1909)
     // and reprinted by Rosa and Grover (1912). Quoted from memory; confirmed with mpmath
-    // (tests/reference/generate_solenoid_reference.py's closed form).
+    // (tests/reference/generate_solenoid_inductance_reference.py's closed form).
     const double table[][2] = {{0.1, 0.9588}, {0.2, 0.9201}, {0.5, 0.8181}, {1.0, 0.6884},
                                {2.0, 0.5255}, {5.0, 0.3198}, {10.0, 0.2033}};
     for (const auto& [ratio, k] : table) EXPECT_NEAR(nagaoka_coefficient(ratio), k, 5.1e-5) << ratio;

@@ -2,7 +2,6 @@
 // (COIL_FZ) against an independent mpmath/numpy reference, closed forms and physical laws.
 #include <gtest/gtest.h>
 
-#include <chrono>
 #include <cmath>
 #include <cstdio>
 
@@ -36,13 +35,11 @@ TEST(WindingInductance, AgreesWithIndependentReference) {
         const WindingShape w1{row.num(1), row.num(2), row.num(3)}, w2{row.num(4), row.num(5), row.num(6)};
         const double d = row.num(7), ref = row.num(9);
         const bool slope = row.cells[8] == "slope";
-        const auto start = std::chrono::steady_clock::now();
         const double got = slope ? winding_mutual_inductance_slope(w1, w2, d) : winding_mutual_inductance(w1, w2, d);
-        const double ms = std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - start).count();
         const double e = rel(got, ref);
         EXPECT_LT(e, 1e-12) << row.cells[0] << " " << row.cells[8];
         worst = std::max(worst, e);
-        std::printf("  %-22s %-5s rel. error %.1e  %6.2f ms\n", row.cells[0].c_str(), row.cells[8].c_str(), e, ms);
+        std::printf("  %-22s %-5s rel. error %.1e\n", row.cells[0].c_str(), row.cells[8].c_str(), e);
         if (!slope && w1.inner == w2.inner && w1.outer == w2.outer && w1.length == w2.length && d == 0) {
             EXPECT_LT(rel(winding_self_inductance(w1), ref), 1e-12) << row.cells[0];
         }
@@ -152,16 +149,12 @@ TEST(WindingInductance, SingularAndBadCasesAreErrors) {
 TEST(WindingInductance, WorkStaysBoundedForExtremeShapes) {
     // Very thin, very flat, very long and near-axis windings all finish quickly and agree with
     // their limits.
-    const auto timed = [](auto f) {
-        const auto start = std::chrono::steady_clock::now();
-        const double v = f();
-        return std::pair{v, std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count()};
-    };
+    // (The work is bounded by construction, 4 million kernel evaluations per call; a runaway
+    // would be caught by ctest's time limit. Speed is measured in bench/, not here.)
     for (const WindingShape w : {WindingShape{1, 1 + 1e-12, 1}, WindingShape{1, 2, 1e-12}, WindingShape{1e-6, 1, 1},
                                  WindingShape{1, 1.5, 1e4}, WindingShape{1, 1e4, 1}}) {
-        const auto [v, s] = timed([&] { return winding_self_inductance(w); });
-        EXPECT_TRUE(std::isfinite(v) && v > 0);
-        EXPECT_LT(s, 2.0) << w.inner << " " << w.outer << " " << w.length;
-        std::printf("  COIL_L(%g, %g, %g): %.6e H in %.1f ms\n", w.inner, w.outer, w.length, v, 1e3 * s);
+        const double v = winding_self_inductance(w);
+        EXPECT_TRUE(std::isfinite(v) && v > 0) << w.inner << " " << w.outer << " " << w.length;
+        std::printf("  COIL_L(%g, %g, %g): %.6e H\n", w.inner, w.outer, w.length, v);
     }
 }
