@@ -9,5 +9,5 @@ tools/build.sh
 if [ "${COILWRIGHT_NO_INSTALL:-0}" != 1 ]; then
   tools/install_extension.sh build/coilwright.oxt || echo "(not installed into LibreOffice; the demo still runs)"
 fi
-/usr/bin/python3 tools/recalc_workbook.py --out-dir build/demo sheets/loop_pair_check.ods
-echo "Look at build/demo/loop_pair_check.pdf (and .csv)."
+/usr/bin/python3 tools/recalc_workbook.py --out-dir build/demo sheets/helmholtz_rig.ods
+echo "Look at build/demo/helmholtz_rig.pdf (and .csv)."

@@ -156,7 +156,9 @@ class Sheet:
         ranges = [data_range] if isinstance(data_range, str) else list(data_range)
         addrs = []
         for text in ranges:  # several ranges: the first column of the first is x
-            r = self.cell(text).getRangeAddress()
+            # "Sheet.A1:B9" names a range on another sheet (charts gathered on a sheet of their own).
+            owner = self.book.doc.Sheets.getByName(text.split(".")[0]) if "." in text else self.sheet
+            r = owner.getCellRangeByName(text.split(".")[-1]).getRangeAddress()
             addrs.append(CellRangeAddress(r.Sheet, r.StartColumn, r.StartRow, r.EndColumn, r.EndRow))
         self.sheet.Charts.addNewByName(name, rect, tuple(addrs), True, False)
         series = sum(a.EndColumn - a.StartColumn + 1 for a in addrs) - 1

@@ -32,10 +32,11 @@ FORMULA = uno.Enum("com.sun.star.table.CellContentType", "FORMULA")
 
 def same_number(a, b, rel=1e-11, scale=0.0):
     """Equal within 1e-11 relative, plus 1e-14 of `scale` (the largest magnitude in the value's
-    array block). Saved values carry 15 significant digits, and a table of B/B0 - 1 in ppm turns
-    a last-bit change of the engine into a larger relative change near its zero; anything beyond
-    these bounds is stale."""
-    return a == b or abs(a - b) <= rel * max(abs(a), abs(b)) + 1e-14 * scale
+    array block), plus 1e-20. Saved values carry 15 significant digits but at most 20 decimal
+    places (LibreOffice 7.4 writes them in fixed notation: 2.03e-13 keeps 8 digits), and a table
+    of B/B0 - 1 in ppm turns a last-bit change of the engine into a larger relative change near
+    its zero; anything beyond these bounds is stale."""
+    return a == b or abs(a - b) <= rel * max(abs(a), abs(b)) + 1e-14 * scale + 1e-20
 
 
 def block_scales(cells):
@@ -143,8 +144,8 @@ class Workbooks(unittest.TestCase):
                     doc = bare.open_document(pathlib.Path(tmp) / path.name)
                     try:
                         doc.calculateAll()
-                        for sheet in doc.Sheets:
-                            self.assertGreaterEqual(sheet.Charts.getCount(), 1 if sheet.Name == "Design" else 0)
+                        charts = sum(sheet.Charts.getCount() for sheet in doc.Sheets)
+                        self.assertGreaterEqual(charts, 1, f"{path.name}: the charts survive")
                         for (sheet_name, row, col), cell in expected.items():
                             live = doc.Sheets.getByName(sheet_name).getCellByPosition(col, row)
                             self.assertEqual(live.getError(), 0, f"{path.name} {sheet_name} {row + 1},{col + 1}")
