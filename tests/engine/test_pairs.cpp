@@ -118,3 +118,21 @@ TEST(Uniformity, BadTolerancesAndZeroFieldsAreErrors) {
     const CoilTable opposed({{0.1, 0.1, 0, -0.05, 1, 1}, {0.1, 0.1, 0, 0.05, 1, -1}});
     EXPECT_THROW(axial_uniform_half_length(opposed, 0.01, 0.0), DomainError);  // B = 0 at the centre
 }
+
+TEST(Pairs, ReadyMadeTablesHaveTheirDefiningProperties) {
+    // Helmholtz and gradient tables from their spacings; Maxwell's table zeroes the 2nd and 4th
+    // derivatives (Maxwell, Treatise, art. 715, quoted from memory and confirmed here).
+    const CoilShape loop{0.2, 0.2, 0};
+    const CoilTable h = flat_pair_table(loop, 10, 2);
+    EXPECT_LT(rel(h.rows()[1].centre_z - h.rows()[0].centre_z, 0.2), 1e-14);
+    EXPECT_LT(rel(axial_field(h, 0), std::pow(0.8, 1.5) * kMu0 * 10 * 2 / 0.2), 1e-14);
+    const CoilTable g = gradient_pair_table({0.1, 0.12, 0.02}, 50, 3);
+    EXPECT_LT(std::fabs(axial_derivatives(g, 0, 3)[3]) * 0.01 / axial_derivatives(g, 0, 1)[1], 1e-12);
+    EXPECT_GT(axial_derivatives(g, 0, 1)[1], 0.0);  // +current at +z: positive gradient
+    const CoilTable m = maxwell_table(0.5, 64, 1);
+    const auto d = axial_derivatives(m, 0, 4);
+    EXPECT_EQ(m.rows()[0].turns, 49.0);
+    EXPECT_LT(std::fabs(d[2]) * 0.25 / d[0], 1e-13);
+    EXPECT_LT(std::fabs(d[4]) * 0.0625 / d[0], 1e-12);
+    EXPECT_THROW(maxwell_table(0, 1, 1), DomainError);
+}
