@@ -64,6 +64,10 @@ void check(const CallResult& r, const FunctionSpec* spec) {
         if (r.message.empty()) finding("a failure without a message", spec);
         return;
     }
+    if (r.is_text) {  // a text result (STACK_CHECK) carries no numbers
+        if (r.text.empty()) finding("an empty text result", spec);
+        return;
+    }
     if (r.values.size() != r.rows * r.cols || r.errors.size() != r.values.size())
         finding("result size does not match its shape", spec);
     if (!r.is_array && (r.rows != 1 || r.cols != 1 || r.errors[0] != CellError::None))
