@@ -4,6 +4,7 @@
 #include <cmath>
 #include <exception>
 #include <limits>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -159,6 +160,22 @@ std::string shape_text(std::size_t rows, std::size_t cols) {
     return std::to_string(rows) + "x" + std::to_string(cols);
 }
 
+// Runs `work`; an engine error it throws becomes the whole call's failure (the same mapping as
+// for single elements in run()).
+template <class F>
+std::optional<CallResult> guarded(F&& work) {
+    try {
+        work();
+        return std::nullopt;
+    } catch (const ConvergenceError& e) {
+        return CallResult::failure(CellError::NoConvergence, e.what());
+    } catch (const std::invalid_argument& e) {  // DomainError, SingularPointError
+        return CallResult::failure(CellError::IllegalArgument, e.what());
+    } catch (const std::exception& e) {
+        return CallResult::failure(CellError::NoValue, e.what());
+    }
+}
+
 // A function that returns its own shape (Prepared::shaped): numeric arguments are single values.
 CallResult evaluate_shaped(const Prepared& prepared, std::span<const Arg* const> numbers,
                            std::span<const ArgSpec* const> number_specs, bool any_array, const char* name) {
@@ -171,15 +188,7 @@ CallResult evaluate_shaped(const Prepared& prepared, std::span<const Arg* const>
         if (!to_number(cell_of_element(*numbers[k], 0, 0), *number_specs[k], values[k], message))
             return CallResult::failure(CellError::IllegalArgument, message);
     CallResult result;
-    try {
-        result = prepared.shaped(values.data());
-    } catch (const ConvergenceError& e) {
-        return CallResult::failure(CellError::NoConvergence, e.what());
-    } catch (const std::invalid_argument& e) {
-        return CallResult::failure(CellError::IllegalArgument, e.what());
-    } catch (const std::exception& e) {
-        return CallResult::failure(CellError::NoValue, e.what());
-    }
+    if (auto failure = guarded([&] { result = prepared.shaped(values.data()); })) return *failure;
     if (result.error != CellError::None) return result;
     const std::size_t count = result.rows * result.cols;
     if (count == 0 || count > kMaxResultCells || result.values.size() != count || result.errors.size() != count)
@@ -256,15 +265,8 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
                                        std::to_string(kMaxResultCells));
 
     Prepared prepared;
-    try {
-        prepared = impl.prepare(std::span<const Arg* const>(tables.data(), tables.size()));
-    } catch (const ConvergenceError& e) {
-        return CallResult::failure(CellError::NoConvergence, e.what());
-    } catch (const std::invalid_argument& e) {
-        return CallResult::failure(CellError::IllegalArgument, e.what());
-    } catch (const std::exception& e) {
-        return CallResult::failure(CellError::NoValue, e.what());
-    }
+    if (auto failure = guarded([&] { prepared = impl.prepare(std::span<const Arg* const>(tables.data(), tables.size())); }))
+        return *failure;
     if (spec.text_result) {
         CallResult text;
         text.is_text = true;

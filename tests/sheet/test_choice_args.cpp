@@ -5,16 +5,13 @@
 #include "coilwright/conductor.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
+#include "call_by_name.hpp"
 
 using namespace coilwright;
 using namespace coilwright::sheet;
 
 namespace {
-CallResult call(const char* name, std::vector<Arg> args) {
-    const int i = function_index(name);
-    EXPECT_GE(i, 0) << name;
-    return evaluate(static_cast<std::size_t>(i), args);
-}
+using helpers::call;
 Arg text(const char* s) { return Arg::scalar(Cell::of_text(s)); }
 double resistance(Arg material) {
     const auto r = call("WIRE_RESISTANCE", {Arg::number(1e-3), Arg::number(10), std::move(material), Arg::missing()});

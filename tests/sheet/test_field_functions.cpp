@@ -11,16 +11,13 @@
 #include "coilwright/thick_coil.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
+#include "call_by_name.hpp"
 
 using namespace coilwright;
 using namespace coilwright::sheet;
 
 namespace {
-CallResult call(const char* name, std::vector<Arg> args) {
-    const int i = function_index(name);
-    EXPECT_GE(i, 0) << name;
-    return evaluate(static_cast<std::size_t>(i), args);
-}
+using helpers::call;
 Arg column(std::vector<double> v) {
     std::vector<Cell> cells;
     for (double x : v) cells.push_back(Cell::of(x));

@@ -8,16 +8,13 @@
 #include "coilwright/self_inductance.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
+#include "call_by_name.hpp"
 
 using namespace coilwright;
 using namespace coilwright::sheet;
 
 namespace {
-CallResult call(const char* name, std::vector<Arg> args) {
-    const int i = function_index(name);
-    EXPECT_GE(i, 0) << name;
-    return evaluate(static_cast<std::size_t>(i), args);
-}
+using helpers::call;
 Arg n(double v) { return Arg::number(v); }
 Arg table(std::vector<std::vector<double>> rows) {
     std::vector<Cell> cells;
