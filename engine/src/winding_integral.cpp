@@ -112,8 +112,11 @@ int order_for(double ratio, double eps) {
     const double z = 2.0 * ratio;
     const double rho = z + std::sqrt(z * z + 1.0);
     const double margin = ratio >= 2.0 ? kFarMargin : 1.0;
-    const int n = static_cast<int>(std::ceil(0.5 * std::log(margin / eps) / std::log(rho)));
-    return std::clamp(n, 2, kMaxGaussOrder);
+    const double n = std::ceil(0.5 * std::log(margin / eps) / std::log(rho));
+    // A ratio that is not a number (a degenerate cell from extreme sizes) takes the highest order
+    // rather than an undefined conversion; the result is checked downstream.
+    if (!(n >= 2.0)) return std::isnan(n) ? kMaxGaussOrder : 2;
+    return static_cast<int>(std::min(n, static_cast<double>(kMaxGaussOrder)));
 }
 
 class CellIntegrator {
