@@ -322,4 +322,35 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     return result;
 }
 
+bool evaluate_plain(std::size_t function_index, std::span<const double> numbers, std::uint32_t omitted,
+                    double& out) noexcept {
+    // No allocation and no copies: this runs once per formula cell, the case a recalculation of
+    // a large sheet is made of. Each check mirrors evaluate(); anything else is left to it.
+    const auto specs = function_specs();
+    if (function_index >= specs.size()) return false;
+    const FunctionSpec& spec = specs[function_index];
+    const Implementation& impl = implementations()[function_index];
+    if (!impl.plain || spec.text_result || numbers.size() != spec.arg_count || spec.arg_count > kMaxArgs ||
+        impl.plain_cost > kMaxWorkPerCall)
+        return false;
+    double element[kMaxArgs];
+    for (std::size_t k = 0; k < spec.arg_count; ++k) {
+        const ArgSpec& as = spec.args[k];
+        if (as.kind != ArgKind::Number) return false;
+        if (omitted >> k & 1u) {
+            if (!as.optional) return false;
+            element[k] = as.default_value;
+        } else {
+            if (is_subnormal(numbers[k])) return false;
+            element[k] = numbers[k];
+        }
+    }
+    try {
+        out = impl.plain(element);
+    } catch (...) {
+        return false;
+    }
+    return std::isfinite(out) && !is_subnormal(out);
+}
+
 }  // namespace coilwright::sheet

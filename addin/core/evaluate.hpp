@@ -3,6 +3,7 @@
 #pragma once
 
 #include <cstddef>
+#include <cstdint>
 #include <span>
 
 #include "cells.hpp"
@@ -16,5 +17,13 @@ inline constexpr double kMaxWorkPerCall = 2.0e8;  // in loop-field evaluations (
 inline constexpr std::size_t kMaxArgs = 16;
 
 CallResult evaluate(std::size_t function_index, std::span<const Arg> args);
+
+// The common cell of a function of numbers: every argument a single number or omitted (bit k
+// of `omitted` set: argument k left out). Returns true and the result in `out` when the call
+// succeeds with one finite number; returns false when it cannot decide (a table, a choice or a
+// range is involved, or anything fails), and evaluate() must then handle the call in full, with
+// its messages. When it returns true, `out` is what evaluate() gives, bit for bit (tested).
+bool evaluate_plain(std::size_t function_index, std::span<const double> numbers, std::uint32_t omitted,
+                    double& out) noexcept;
 
 }  // namespace coilwright::sheet

@@ -7,9 +7,12 @@
 namespace coilwright::sheet {
 
 Implementation numeric(const char* name, ElementFn fn, double cost, BatchFn batch) {
-    return {name, [fn = std::move(fn), cost, batch = std::move(batch)](std::span<const Arg* const>) {
-                return Prepared{fn, cost, batch, {}};
-            }};
+    ElementFn plain = fn;
+    return {name,
+            [fn = std::move(fn), cost, batch = std::move(batch)](std::span<const Arg* const>) {
+                return Prepared{fn, cost, batch, {}, {}};
+            },
+            std::move(plain), cost};
 }
 
 Implementation text_result(const char* name, TextFn fn) {
@@ -36,7 +39,7 @@ const std::vector<Implementation>& implementations() {
     static const std::vector<Implementation> ordered = [] {
         const std::vector<Implementation> all = contributed_implementations();
         const auto specs = function_specs();
-        std::vector<Implementation> out(specs.size(), Implementation{nullptr, {}});
+        std::vector<Implementation> out(specs.size(), Implementation{nullptr, {}, {}, 0.0});
         for (auto& impl : all) {
             const int i = function_index(impl.name);
             if (i >= 0) out[static_cast<std::size_t>(i)] = impl;

@@ -40,6 +40,10 @@ using PrepareFn = std::function<Prepared(std::span<const Arg* const> tables)>;
 struct Implementation {
     const char* name;
     PrepareFn prepare;
+    // For a function of numbers only (numeric()): its element function and cost, so that a
+    // cell of plain numbers can skip preparing (evaluate_plain). Empty for the others.
+    ElementFn plain = {};
+    double plain_cost = 0.0;
 };
 
 // A function whose arguments are all numbers; `batch` (optional) computes arrays faster.

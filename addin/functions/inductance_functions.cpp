@@ -110,7 +110,7 @@ std::vector<Implementation> inductance_functions() {
                            return Prepared{[table](const double* a) {
                                                return series_inductance(table, optional_diameter(a[0]));
                                            },
-                                           cost, {}};
+                                           cost, {}, {}, {}};
                        }),
         table_function("STACK_ENERGY",
                        [](CoilTable table) {
@@ -118,7 +118,7 @@ std::vector<Implementation> inductance_functions() {
                            return Prepared{[table](const double* a) {
                                                return stored_energy(table, optional_diameter(a[0]));
                                            },
-                                           cost, {}};
+                                           cost, {}, {}, {}};
                        }),
     };
 }

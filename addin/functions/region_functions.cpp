@@ -19,7 +19,7 @@ Implementation on_table(const char* name, F per_element, double evaluations) {
                 double per_point = 0;
                 for (const CoilRow& row : table->rows()) per_point += row_cost(row);
                 return Prepared{[table, per_element](const double* a) { return per_element(*table, a); },
-                                evaluations * per_point, {}, {}};
+                                evaluations * per_point, {}, {}, {}};
             }};
 }
 

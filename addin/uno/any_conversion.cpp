@@ -68,6 +68,25 @@ sheet::Arg to_arg(const Any& value) {
     return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
 }
 
+bool plain_numbers(const Any* const* args, std::size_t count, double* numbers, std::uint32_t& omitted) {
+    omitted = 0;
+    for (std::size_t k = 0; k < count; ++k) {
+        const Any& v = *args[k];
+        switch (v.getValueTypeClass()) {
+            case TypeClass_DOUBLE:
+                numbers[k] = *static_cast<const double*>(v.getValue());
+                break;
+            case TypeClass_VOID:
+                numbers[k] = 0.0;
+                omitted |= std::uint32_t{1} << k;
+                break;
+            default:
+                return false;
+        }
+    }
+    return true;
+}
+
 double calc_error_value(sheet::CellError error) {
     std::uint64_t bits = 0x7FF8000000000000ULL | static_cast<std::uint32_t>(error);
     double d;

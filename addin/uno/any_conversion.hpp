@@ -3,6 +3,9 @@
 
 #include <com/sun/star/uno/Any.hxx>
 
+#include <cstddef>
+#include <cstdint>
+
 #include "../core/cells.hpp"
 
 namespace coilwright::uno_glue {
@@ -10,6 +13,10 @@ namespace coilwright::uno_glue {
 // What Calc passes for an `any` parameter: void (omitted), double, string, or a range as
 // sequence< sequence< any > >.
 sheet::Arg to_arg(const css::uno::Any& value);
+
+// The common cell: every argument a double or omitted (void). Fills numbers[0..count) and sets
+// bit k of `omitted` for an omitted argument k; false as soon as one is anything else.
+bool plain_numbers(const css::uno::Any* const* args, std::size_t count, double* numbers, std::uint32_t& omitted);
 
 // A double for one value, a string for a text result, or sequence< sequence< double > > with
 // error elements encoded as Calc's error NaNs. Whole-call failures are thrown by the caller.

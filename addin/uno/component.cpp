@@ -62,6 +62,14 @@ private:
     void* mapped_proxy_ = nullptr;  // uno_Interface*, deliberately never released (see above)
 
     uno::Any dispatch(std::size_t index, const uno::Any* const* args, std::size_t count) {
+        // Most cells pass plain numbers and succeed: answer them without building the call.
+        double numbers[sheet::kMaxArgs];
+        std::uint32_t omitted = 0;
+        double value = 0.0;
+        if (count <= sheet::kMaxArgs && plain_numbers(args, count, numbers, omitted) &&
+            sheet::evaluate_plain(index, {numbers, count}, omitted, value))
+            return uno::Any(value);
+
         sheet::CallResult result;
         try {
             sheet::FixedVector<sheet::Arg, sheet::kMaxArgs> converted;  // no function has more (checked by a test)

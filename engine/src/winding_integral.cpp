@@ -86,6 +86,10 @@ constexpr double kCoarseShare = 1e-9;
 // A box near a singularity is not refined below this share of the cell's volume: with the
 // logarithmic singularities here, what it holds is then below the target too.
 constexpr double kNearShare = 1e-16;
+// Every level halves a box, so the share floor above stops refinement within about 60 levels;
+// deeper means the halving stalls (extreme sizes whose differences round away), and the
+// recursion must end rather than exhaust the stack of the process that called it.
+constexpr int kMaxDepth = 200;
 
 using Vec3 = std::array<double, 3>;
 
@@ -129,7 +133,8 @@ public:
         coarse_ = false;
     }
 
-    double integrate(const Vec3& lo, const Vec3& hi) {
+    double integrate(const Vec3& lo, const Vec3& hi, int depth = 0) {
+        if (depth > kMaxDepth) throw ConvergenceError("the inductance integral does not settle for these sizes");
         // Lower bounds over the box of the radial gap |r1 - r2| and of r1 + r2. The kernel is
         // singular where (r1 - r2)^2 + u^2 = 0 (coincidence) and where (r1 + r2)^2 + u^2 = 0
         // (the mirror filament): lower bounds of the distances to these, in any direction, are
@@ -203,7 +208,7 @@ public:
                 const double mid = 0.5 * (lo[i] + hi[i]);
                 (upper ? clo[i] : chi[i]) = mid;
             }
-            if (valid) total += integrate(clo, chi);
+            if (valid) total += integrate(clo, chi, depth + 1);
         }
         return total;
     }

@@ -146,6 +146,33 @@ TEST(WindingInductance, SingularAndBadCasesAreErrors) {
     EXPECT_THROW(winding_mutual_inductance({1, 2, 1}, {1, 1, 1}, std::nan("")), DomainError);
 }
 
+TEST(WindingInductance, ProportionsBeyondTheAccurateRangeAreErrors) {
+    // A winding 1e308 m long beside one of 1 m used to exhaust the stack (refinement stalled and
+    // recursed without end; found by the call-layer test of the plain-number path) and a 1e20 m
+    // one gave a wrong number: lengths and distances above a million outer radii are refused.
+    EXPECT_THROW(winding_self_inductance({0.01, 1, 1e308}), DomainError);
+    EXPECT_THROW(winding_mutual_inductance({0.01, 1, 0}, {0.01, 1, 1e20}, 3), DomainError);
+    EXPECT_THROW(winding_mutual_inductance({0.1, 0.12, 0.05}, {0.1, 0.12, 0.05}, 2e5), DomainError);
+    EXPECT_NO_THROW(winding_mutual_inductance({0.1, 0.12, 0.05}, {0.1, 0.12, 0.05}, 1e5));
+}
+
+TEST(WindingInductance, LongWindingsApproachTheLongSolenoidLimit) {
+    // A flat spiral (radii a1..a2, one turn spread evenly over the radius) inside a long thick
+    // winding of the same radii, far from its ends. Reference: the field of a long thick
+    // winding from Ampere's law (textbook): B = mu0 n inside the bore, falling linearly to 0
+    // across the winding; the flux through each turn averaged over the spiral, in closed form.
+    // End effects are below 1e-9 relative here. The README states about 1e-8 for such
+    // proportions (a thousand radii and more); this bounds it by 1e-7.
+    const double a1 = 0.01, a2 = 1.0, d = a2 - a1;
+    const double integral = a2 / 2 * ((a2 * a2 * a2 - a1 * a1 * a1) / 3 - a1 * a1 * d) -
+                            ((a2 * a2 * a2 * a2 - a1 * a1 * a1 * a1) / 4 - a1 * a1 * a1 * d) / 3;
+    const double per_mu0_n = kPi * a1 * a1 + 2 * kPi / (d * d) * integral;  // M / (mu0 n)
+    for (double length : {1e5, 1e6}) {
+        const double m = winding_mutual_inductance({a1, a2, 0}, {a1, a2, length}, 3.0);
+        EXPECT_NEAR(m * length / (kMu0 * per_mu0_n), 1.0, 1e-7) << length;
+    }
+}
+
 TEST(WindingInductance, WorkStaysBoundedForExtremeShapes) {
     // Very thin, very flat, very long and near-axis windings all finish quickly and agree with
     // their limits.
