@@ -5,7 +5,9 @@
 // a message with every whole-call failure, and only the error codes Calc is given.
 #include <cmath>
 #include <cstdio>
+#include <cstdint>
 #include <cstdlib>
+#include <cstring>
 #include <limits>
 #include <vector>
 
@@ -78,6 +80,27 @@ void check(const CallResult& r, const FunctionSpec* spec) {
     }
 }
 
+// The shortcut for cells of plain numbers: where it answers, evaluate() gave that very number.
+void check_plain(std::size_t function, const std::vector<Arg>& args, const CallResult& full, const FunctionSpec* spec) {
+    if (args.size() > kMaxArgs) return;
+    double numbers[kMaxArgs] = {};
+    std::uint32_t omitted = 0;
+    for (std::size_t k = 0; k < args.size(); ++k) {
+        if (args[k].form == Arg::Form::Missing) {
+            omitted |= std::uint32_t{1} << k;
+        } else if (args[k].form == Arg::Form::Scalar && args[k].value.kind == CellKind::Number) {
+            numbers[k] = args[k].value.number;
+        } else {
+            return;  // not a plain call
+        }
+    }
+    double out = 0.0;
+    if (!evaluate_plain(function, {numbers, args.size()}, omitted, out)) return;
+    if (full.error != CellError::None || full.is_array || full.is_text || full.values.size() != 1 ||
+        std::memcmp(&out, &full.values[0], sizeof out) != 0)
+        finding("the plain-number shortcut disagrees with the full call", spec);
+}
+
 }  // namespace
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
@@ -98,6 +121,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     if (in.below(16) == 0) count = in.byte() & 1 ? count + 1 : (count ? count - 1 : 0);
     std::vector<Arg> args;
     for (std::size_t i = 0; i < count; ++i) args.push_back(make_arg(in));
-    check(evaluate(pick, args), &spec);
+    const CallResult full = evaluate(pick, args);
+    check(full, &spec);
+    check_plain(pick, args, full, &spec);
     return 0;
 }
