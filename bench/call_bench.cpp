@@ -1,7 +1,9 @@
 // call-bench: cost of the add-in's UNO-free call layer (argument checks, broadcasting, error
 // cells, the engine) per cell, without LibreOffice. Prints "<case> <ns per cell>", medians of
 // this thread's processor time over several passes:
-//   scalar_cell   =LOOP_BZ(a;N;I;z) one call per cell (what a column of formulas costs us)
+//   scalar_cell   =LOOP_BZ(a;N;I;z) one call per cell through the full call (evaluate)
+//   plain_cell    the same cells through the plain-number shortcut the add-in tries first
+//                 (evaluate_plain); the ratio says what the shortcut saves
 //   array_column  {=LOOP_BZ(a;N;I;z;r)} over a column of 100,000 off-axis points, one call
 // What LibreOffice adds around each call is measured by bench/calc_bench.py.
 #include <time.h>
@@ -59,6 +61,17 @@ int main() {
         },
         cells, 9);
     std::printf("scalar_cell %.1f\n", scalar);
+    const double plain = median_ns_per_cell(
+        [&] {
+            for (std::size_t i = 0; i < cells; ++i) {
+                const double numbers[] = {0.1, 100, 1.5, zs[i], 0.0};
+                double out = 0.0;
+                if (evaluate_plain(loop_bz, numbers, 1u << 4, out)) sink += out;  // r omitted
+            }
+        },
+        cells, 9);
+    std::printf("plain_cell %.1f\n", plain);
+    std::printf("plain_cell/scalar_cell %.2f\n", plain / scalar);
 
     std::vector<Cell> zc(n), rc(n);
     for (std::size_t i = 0; i < n; ++i) {
