@@ -1,5 +1,6 @@
 """Shared set-up for the end-to-end tests: one Calc session per test module."""
 import csv
+import math
 import os
 import pathlib
 import unittest
@@ -78,6 +79,22 @@ class CalcTestCase(unittest.TestCase):
                 cell.setString(v)
             elif v is not None:
                 cell.setValue(v)
+
+    def assert_field_matches(self, row, bz, br, b, tol=1e-13):
+        """Bz, Br and |B| from Calc against a row of a reference CSV (columns bz_T, br_T, case,
+        z_m, r_m), relative to |B| where Bz changes sign."""
+        bz_ref, br_ref = float(row["bz_T"]), float(row["br_T"])
+        mag = math.hypot(bz_ref, br_ref)
+        label = f"{row['case']} z={row['z_m']} r={row['r_m']}"
+        if row["case"] == "sign change":
+            self.assertLessEqual(abs(bz - bz_ref), tol * mag, label)
+        else:
+            self.assert_rel(bz, bz_ref, tol, label)
+        if br_ref == 0:
+            self.assertEqual(br, 0.0, label)
+        else:
+            self.assert_rel(br, br_ref, tol, label)
+        self.assert_rel(b, mag, tol, label)
 
     def assert_rel(self, got, want, tol, msg=""):
         scale = abs(want) if want != 0 else 1e-300

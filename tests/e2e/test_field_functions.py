@@ -41,18 +41,7 @@ class FieldFunctionsInCalc(CalcTestCase):
             bz = self.value(f"G{n}", f"=SOLENOID_BZ({args})")
             br = self.value(f"H{n}", f"=SOLENOID_BR({args})")
             b = self.value(f"I{n}", f"=SOLENOID_B({args})")
-            bz_ref, br_ref = float(row["bz_T"]), float(row["br_T"])
-            mag = math.hypot(bz_ref, br_ref)
-            label = f"{row['case']} z={row['z_m']} r={row['r_m']}"
-            if row["case"] == "sign change":
-                self.assertLessEqual(abs(bz - bz_ref), 1e-13 * mag, label)
-            else:
-                self.assert_rel(bz, bz_ref, 1e-13, label)
-            if br_ref == 0:
-                self.assertEqual(br, 0.0, label)
-            else:
-                self.assert_rel(br, br_ref, 1e-13, label)
-            self.assert_rel(b, mag, 1e-13, label)
+            self.assert_field_matches(row, bz, br, b)
 
     def test_coils_and_spirals_agree_with_mpmath_reference(self):
         # tests/reference/coil_field.csv: thick rows through COIL_*, flat spirals as one-row tables.
