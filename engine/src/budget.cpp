@@ -56,10 +56,8 @@ double coil_current_density(double current, double diameter) {
 }
 
 double coil_cooling_area(double inner_radius, double outer_radius, double length) {
-    check::positive(inner_radius, "inner radius");
-    check::positive(outer_radius, "outer radius");
+    check::radial_extent(inner_radius, outer_radius);
     check::non_negative(length, "length");
-    if (outer_radius < inner_radius) throw DomainError("outer radius must be >= inner radius");
     const double ends = 2.0 * kPi * (outer_radius - inner_radius) * (outer_radius + inner_radius);
     return check::finite_result(2.0 * kPi * outer_radius * length + ends, "cooling area");
 }

@@ -16,9 +16,7 @@
 namespace coilwright {
 
 void validate(const FlatSpiralSpec& spiral) {
-    check::positive(spiral.inner_radius, "inner radius");
-    check::positive(spiral.outer_radius, "outer radius");
-    if (spiral.outer_radius < spiral.inner_radius) throw DomainError("outer radius must be >= inner radius");
+    check::radial_extent(spiral.inner_radius, spiral.outer_radius);
     check::non_negative(spiral.turns, "turns");
     check::finite(spiral.current, "current");
 }

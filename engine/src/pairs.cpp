@@ -19,9 +19,7 @@ CoilTable single(const CoilShape& coil, double turns, double current) {
 }
 
 void validate_shape(const CoilShape& coil) {
-    check::positive(coil.inner_radius, "inner radius");
-    check::finite(coil.outer_radius, "outer radius");
-    if (coil.outer_radius < coil.inner_radius) throw DomainError("outer radius must be >= inner radius");
+    check::radial_extent(coil.inner_radius, coil.outer_radius);
     check::non_negative(coil.length, "length");
 }
 

@@ -23,9 +23,7 @@
 namespace coilwright {
 
 void validate(const ThickCoilSpec& coil) {
-    check::positive(coil.inner_radius, "inner radius");
-    check::positive(coil.outer_radius, "outer radius");
-    if (coil.outer_radius < coil.inner_radius) throw DomainError("outer radius must be >= inner radius");
+    check::radial_extent(coil.inner_radius, coil.outer_radius);
     check::positive(coil.length, "length");
     check::non_negative(coil.turns, "turns");
     check::finite(coil.current, "current");

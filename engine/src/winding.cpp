@@ -137,9 +137,7 @@ double winding_fill(double turns, double bare_diameter, double build, double len
 }
 
 double winding_mean_turn(double inner_radius, double outer_radius) {
-    check::positive(inner_radius, "inner radius");
-    check::positive(outer_radius, "outer radius");
-    if (outer_radius < inner_radius) throw DomainError("outer radius must be >= inner radius");
+    check::radial_extent(inner_radius, outer_radius);
     return check::finite_result(kPi * (inner_radius + outer_radius), "mean turn");
 }
 

@@ -23,11 +23,8 @@
 namespace coilwright {
 
 void validate(const WindingShape& shape, const char* which) {
-    const std::string prefix(which);
-    check::positive(shape.inner, (prefix + "inner radius").c_str());
-    check::positive(shape.outer, (prefix + "outer radius").c_str());
-    check::non_negative(shape.length, (prefix + "length").c_str());
-    if (shape.outer < shape.inner) throw DomainError(prefix + "outer radius must be >= inner radius");
+    check::radial_extent(shape.inner, shape.outer, which);
+    check::non_negative(shape.length, (std::string(which) + "length").c_str());
 }
 
 namespace {
