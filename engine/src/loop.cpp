@@ -44,15 +44,8 @@ FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
 
     // State after the first Gauss step of cel(kc, kc^2, 1, 0) [index 0] and of
     // cel(kc, kc^2, -1, 1) / k^2 [index 1]; p = sqrt(kc^2) = kc on entry.
-    CelLoop<2> s{};
-    s.qc = kc;
-    s.p = 1.0 + kc;
-    s.g = 1.0;
-    s.em = 1.0 + kc;
-    s.e = kc;
-    s.a = {1.0, 1.0 / (kc * kc)};
-    s.b = {2.0, 2.0 / (kc * (1.0 + kc))};
-    const auto [P, C2] = s.finish();
+    const auto [P, C2] =
+        CelLoop<2>::after_first_step(kc, {1.0, 1.0 / (kc * kc)}, {2.0, 2.0 / (kc * (1.0 + kc))}).finish();
 
     const double pref = 1.0 / (kPi * beta * beta * beta);
     const double radial = k2 * C2;  // integral (sin^2 - cos^2) / D^3, positive

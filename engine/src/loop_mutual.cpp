@@ -36,15 +36,7 @@ double filament_mutual(double r1, double r2, double diff, double u) {
     const double beta = std::hypot(lo + hi, u);
     const double kc = alpha / beta;
     const double k2 = 4.0 * (lo / beta) * (hi / beta);
-    CelLoop<1> s{};
-    s.qc = kc;
-    s.p = 1.0 + kc;
-    s.g = 1.0;
-    s.em = 1.0 + kc;
-    s.e = kc;
-    s.a = {0.0};
-    s.b = {2.0 / (1.0 + kc)};
-    const double c = s.finish()[0];
+    const double c = CelLoop<1>::after_first_step(kc, {0.0}, {2.0 / (1.0 + kc)}).finish()[0];
     return kMu0 * beta * (k2 * k2) * c * 0.5;
 }
 

@@ -69,6 +69,20 @@ struct CelLoop {
         em += qc;
     }
 
+    // The state after a first Gauss step of cel(kc, kc^2, ., .) that the caller took by hand
+    // (p = kc on entry, so that step needs no division); a and b are its results.
+    static CelLoop after_first_step(double kc, const std::array<double, N>& a, const std::array<double, N>& b) {
+        CelLoop s{};
+        s.qc = kc;
+        s.p = 1.0 + kc;
+        s.g = 1.0;
+        s.em = 1.0 + kc;
+        s.e = kc;
+        s.a = a;
+        s.b = b;
+        return s;
+    }
+
     // Starts the loop for cel(kc, p, a, b) with p > 0 and kc != 0 (no hand-made first step).
     static CelLoop start(double kc, double p_char, const std::array<double, N>& a0,
                          const std::array<double, N>& b0) {
