@@ -61,6 +61,16 @@ Implementation table_function(const char* name, std::function<Prepared(CoilTable
             }};
 }
 
+// One number from the whole table and the optional wire diameter of its loop rows.
+template <class F>
+Implementation table_quantity(const char* name, F quantity) {
+    return table_function(name, [quantity](CoilTable table) {
+        const double cost = stack_work_estimate(table);
+        return Prepared{[table, quantity](const double* a) { return quantity(table, optional_diameter(a[0])); },
+                        cost, {}, {}, {}};
+    });
+}
+
 }  // namespace
 
 std::vector<Implementation> inductance_functions() {
@@ -104,22 +114,8 @@ std::vector<Implementation> inductance_functions() {
                            };
                            return p;
                        }),
-        table_function("STACK_L",
-                       [](CoilTable table) {
-                           const double cost = stack_work_estimate(table);
-                           return Prepared{[table](const double* a) {
-                                               return series_inductance(table, optional_diameter(a[0]));
-                                           },
-                                           cost, {}, {}, {}};
-                       }),
-        table_function("STACK_ENERGY",
-                       [](CoilTable table) {
-                           const double cost = stack_work_estimate(table);
-                           return Prepared{[table](const double* a) {
-                                               return stored_energy(table, optional_diameter(a[0]));
-                                           },
-                                           cost, {}, {}, {}};
-                       }),
+        table_quantity("STACK_L", [](const CoilTable& t, std::optional<double> d) { return series_inductance(t, d); }),
+        table_quantity("STACK_ENERGY", [](const CoilTable& t, std::optional<double> d) { return stored_energy(t, d); }),
     };
 }
 

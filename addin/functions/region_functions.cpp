@@ -1,26 +1,16 @@
 // STACK_DBZDZ, STACK_UNIFORM_R, STACK_UNIFORM_SPHERE, STACK_SCALE_FOR_BZ, STACK_SCALE_FOR_GRADIENT.
-#include <memory>
-
 #include "coilwright/coil_stack.hpp"
 #include "coilwright/regions.hpp"
-#include "../core/coil_table_arg.hpp"
-#include "../core/registry.hpp"
+#include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {
 
 namespace {
 
-// A function of (table; numbers...): the table is read once per call; the work estimate is
 // `evaluations` field points of the whole table per element.
 template <class F>
 Implementation on_table(const char* name, F per_element, double evaluations) {
-    return {name, [per_element, evaluations](std::span<const Arg* const> tables) {
-                auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
-                double per_point = 0;
-                for (const CoilRow& row : table->rows()) per_point += row_cost(row);
-                return Prepared{[table, per_element](const double* a) { return per_element(*table, a); },
-                                evaluations * per_point, {}, {}, {}};
-            }};
+    return on_coil_table(name, per_element, [evaluations](const CoilTable& t) { return evaluations * field_point_cost(t); });
 }
 
 }  // namespace

@@ -1,12 +1,10 @@
 // STACK_SENSITIVITY: tolerance analysis of a coil table.
 #include <cmath>
-#include <memory>
 #include <string>
 
 #include "coilwright/errors.hpp"
 #include "coilwright/sensitivity.hpp"
-#include "../core/coil_table_arg.hpp"
-#include "../core/registry.hpp"
+#include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {
 
@@ -27,18 +25,17 @@ std::size_t index_of_label(const CoilTable& table, double label) {
 }  // namespace
 
 std::vector<Implementation> sensitivity_functions() {
-    return {{"STACK_SENSITIVITY", [](std::span<const Arg* const> tables) {
-                 auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
-                 // Arguments after the table: row, parameter, quantity, z0, tolerance.
-                 auto fn = [table](const double* a) {
-                     const std::size_t index = index_of_label(*table, a[0]);
-                     const CoilParameter parameter = kParameters[static_cast<std::size_t>(a[1])];
-                     return a[2] == 0.0 ? field_sensitivity(*table, index, parameter, a[3])
-                                        : uniform_length_sensitivity(*table, index, parameter, a[3], a[4]);
-                 };
-                 // A uniform-region sensitivity runs about five region searches.
-                 return Prepared{fn, 15000.0 * static_cast<double>(table->size()), {}, {}};
-             }}};
+    return {on_coil_table(
+        "STACK_SENSITIVITY",
+        // Arguments after the table: row, parameter, quantity, z0, tolerance.
+        [](const CoilTable& table, const double* a) {
+            const std::size_t index = index_of_label(table, a[0]);
+            const CoilParameter parameter = kParameters[static_cast<std::size_t>(a[1])];
+            return a[2] == 0.0 ? field_sensitivity(table, index, parameter, a[3])
+                               : uniform_length_sensitivity(table, index, parameter, a[3], a[4]);
+        },
+        // A uniform-region sensitivity runs about five region searches.
+        [](const CoilTable& table) { return 15000.0 * static_cast<double>(table.size()); })};
 }
 
 }  // namespace coilwright::sheet

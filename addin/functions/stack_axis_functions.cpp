@@ -1,25 +1,20 @@
 // STACK_DNBZ, STACK_UNIFORM_Z, STACK_LINEAR_Z: the axis of a coil table.
 #include <cmath>
-#include <memory>
 
 #include "coilwright/axial.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/uniformity.hpp"
-#include "../core/coil_table_arg.hpp"
-#include "../core/registry.hpp"
+#include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {
 
 namespace {
 
-// A function of (table; two numbers): the table is read once per call.
+// The axis functions' work grows with the number of rows.
 template <class F>
 Implementation on_table(const char* name, F per_element, double cost_per_row) {
-    return {name, [per_element, cost_per_row](std::span<const Arg* const> tables) {
-                auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
-                return Prepared{[table, per_element](const double* a) { return per_element(*table, a); },
-                                cost_per_row * static_cast<double>(table->size()), {}, {}};
-            }};
+    return on_coil_table(name, per_element,
+                         [cost_per_row](const CoilTable& t) { return cost_per_row * static_cast<double>(t.size()); });
 }
 
 int whole_order(double v) {

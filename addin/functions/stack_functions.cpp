@@ -1,26 +1,20 @@
 // STACK_* : a table of coaxial coils, read once per call.
-#include <memory>
 #include <string>
 
 #include "coilwright/coil_stack.hpp"
 #include "coilwright/errors.hpp"
 #include "../core/coil_table_arg.hpp"
-#include "../core/registry.hpp"
+#include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {
 
 namespace {
 
-// Parses the table argument once; the element function evaluates the sum of the rows at (z, r).
-PrepareFn stack_component(double (*pick)(const FieldRZ&)) {
-    return [pick](std::span<const Arg* const> tables) {
-        auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
-        double cost = 0.0;
-        for (const CoilRow& row : table->rows()) cost += row_cost(row);
-        // Arguments after the table, as in idl/functions/40_stack.toml: z, r.
-        ElementFn fn = [table, pick](const double* a) { return pick(stack_field(*table, a[0], a[1])); };
-        return Prepared{std::move(fn), cost, {}};
-    };
+// The sum of the rows' fields at (z, r), the arguments after the table (idl/functions/40_stack.toml).
+Implementation stack_component(const char* name, double (*pick)(const FieldRZ&)) {
+    return on_coil_table(
+        name, [pick](const CoilTable& t, const double* a) { return pick(stack_field(t, a[0], a[1])); },
+        field_point_cost);
 }
 
 const char* kind_name(CoilRow::Kind kind, bool plural) {
@@ -60,9 +54,9 @@ std::string check_table(std::span<const Arg* const> tables) {
 
 std::vector<Implementation> stack_functions() {
     return {
-        {"STACK_BZ", stack_component([](const FieldRZ& f) { return f.bz; })},
-        {"STACK_BR", stack_component([](const FieldRZ& f) { return f.br; })},
-        {"STACK_B", stack_component([](const FieldRZ& f) { return f.magnitude(); })},
+        stack_component("STACK_BZ", [](const FieldRZ& f) { return f.bz; }),
+        stack_component("STACK_BR", [](const FieldRZ& f) { return f.br; }),
+        stack_component("STACK_B", [](const FieldRZ& f) { return f.magnitude(); }),
         text_result("STACK_CHECK", check_table),
     };
 }
