@@ -1,5 +1,6 @@
 // LOOP_FZ, COIL_FZ, STACK_FZ, SOLENOID_PRESSURE.
 #include "../core/coil_table_arg.hpp"
+#include "../core/matrix_result.hpp"
 #include "../core/registry.hpp"
 #include "coilwright/inductance.hpp"
 
@@ -28,17 +29,7 @@ std::vector<Implementation> force_functions() {
              const CoilTable table = read_coil_table(*tables[0]);
              Prepared p;
              p.cost = table_work_estimate(table);
-             p.shaped = [table](const double*) {
-                 const MatrixWithProblems f = axial_forces(table);
-                 CallResult r;
-                 r.rows = static_cast<std::size_t>(f.values.rows());
-                 r.cols = 1;
-                 r.values.assign(f.values.data(), f.values.data() + r.rows);
-                 r.errors.assign(r.rows, CellError::None);
-                 for (std::size_t i = 0; i < r.rows; ++i)
-                     if (!f.problems[i].empty()) r.errors[i] = CellError::IllegalArgument;
-                 return r;
-             };
+             p.shaped = [table](const double*) { return matrix_call_result(axial_forces(table)); };
              return p;
          }},
         numeric("SOLENOID_PRESSURE",

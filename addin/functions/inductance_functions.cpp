@@ -3,6 +3,7 @@
 #include <optional>
 
 #include "../core/coil_table_arg.hpp"
+#include "../core/matrix_result.hpp"
 #include "../core/registry.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/inductance.hpp"
@@ -16,21 +17,6 @@ constexpr double kLoopCost = 1.0;
 constexpr double kWindingCost = 5e4;
 
 CoilSection section(const double* a) { return {a[0], a[1], a[2]}; }
-
-CallResult matrix_result(const MatrixWithProblems& m) {
-    CallResult r;
-    r.rows = static_cast<std::size_t>(m.values.rows());
-    r.cols = static_cast<std::size_t>(m.values.cols());
-    r.values.resize(r.rows * r.cols);
-    r.errors.assign(r.rows * r.cols, CellError::None);
-    for (std::size_t i = 0; i < r.rows; ++i)
-        for (std::size_t j = 0; j < r.cols; ++j) {
-            const std::size_t at = i * r.cols + j;
-            r.values[at] = m.values(static_cast<Eigen::Index>(i), static_cast<Eigen::Index>(j));
-            if (!m.problems[at].empty()) r.errors[at] = CellError::IllegalArgument;
-        }
-    return r;
-}
 
 // A function of a coil table (first argument) and numbers.
 Implementation table_function(const char* name, std::function<Prepared(CoilTable)> make) {
@@ -74,7 +60,7 @@ std::vector<Implementation> inductance_functions() {
                            Prepared p;
                            p.cost = table_work_estimate(table);
                            p.shaped = [table](const double* a) {
-                               return matrix_result(inductance_matrix(table, optional_wire_diameter(a[0])));
+                               return matrix_call_result(inductance_matrix(table, optional_wire_diameter(a[0])));
                            };
                            return p;
                        }),

@@ -35,7 +35,7 @@ TEST(StackInductance, MatrixIsSymmetricPositiveDefiniteAndMatchesThePairs) {
     ASSERT_EQ(n, 7);
     for (Eigen::Index i = 0; i < n; ++i)
         for (Eigen::Index j = 0; j < n; ++j) {
-            ASSERT_TRUE(m.valid(i, j)) << m.problems[static_cast<std::size_t>(i * n + j)];
+            ASSERT_TRUE(m.valid(i, j)) << m.problems[static_cast<std::size_t>(i * n + j)].message;
             EXPECT_EQ(m.values(i, j), m.values(j, i));  // reciprocity, M12 = M21
         }
     // Entries are the pairwise functions.
@@ -60,7 +60,7 @@ TEST(StackInductance, LoopsWithoutWireDiameterAreErrorCellsOnlyOnTheirDiagonal) 
     for (Eigen::Index i = 0; i < 7; ++i)
         for (Eigen::Index j = 0; j < 7; ++j) EXPECT_EQ(m.valid(i, j), !(i == 4 && j == 4)) << i << " " << j;
     EXPECT_TRUE(std::isnan(m.values(4, 4)));
-    EXPECT_NE(m.problems[4 * 7 + 4].find("row 5"), std::string::npos);
+    EXPECT_NE(m.problems[4 * 7 + 4].message.find("row 5"), std::string::npos);
 }
 
 TEST(StackInductance, CoincidentLoopsAreErrorCells) {
@@ -102,7 +102,7 @@ TEST(StackInductance, ForcesBalanceAndMatchThePairs) {
     const MatrixWithProblems f = axial_forces(table);
     double sum = 0, scale = 0;
     for (Eigen::Index i = 0; i < 7; ++i) {
-        ASSERT_TRUE(f.valid(i, 0)) << f.problems[static_cast<std::size_t>(i)];
+        ASSERT_TRUE(f.valid(i, 0)) << f.problems[static_cast<std::size_t>(i)].message;
         sum += f.values(i, 0);
         scale += std::fabs(f.values(i, 0));
     }

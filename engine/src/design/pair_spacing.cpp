@@ -1,6 +1,5 @@
 #include "coilwright/design/pair_spacing.hpp"
 
-#include <boost/math/tools/roots.hpp>
 #include <cmath>
 #include <cstdint>
 
@@ -10,6 +9,8 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "design/scan.hpp"
+#include "numerics/policy.hpp"
+#include "numerics/roots.hpp"
 
 namespace coilwright {
 
@@ -35,23 +36,20 @@ double first_sign_change(const CoilSection& coil, std::size_t k) {
     const double sign0 = std::copysign(1.0, derivative(start));
     double lo = start;
     const double limit = 100.0 * (coil.outer_radius + coil.length);
-    while (lo < limit) {
+    // Steps grow with the distance travelled (axial_scan_step): a few thousand reach the limit.
+    for (StepBudget budget(100'000, "the pair-spacing scan"); lo < limit; budget.step()) {
         const double hi = lo + axial_scan_step(table, lo, lo);
-        if (std::copysign(1.0, derivative(hi)) != sign0) {
-            std::uintmax_t iterations = 100;
-            const auto [a, b] = boost::math::tools::toms748_solve(
-                derivative, lo, hi, boost::math::tools::eps_tolerance<double>(52), iterations);
-            return (a + b) / 2.0;
-        }
+        if (std::copysign(1.0, derivative(hi)) != sign0)
+            return bracketed_root(derivative, lo, hi, "the pair-spacing root", 52);
         lo = hi;
     }
-    throw ConvergenceError("no sign change of the axial derivative found");
+    raise_no_convergence("no sign change of the axial derivative found");
 }
 
 double checked_spacing(const CoilSection& coil, double half) {
     const double spacing = 2.0 * half;
     if (spacing < coil.length)
-        throw DomainError("the coils would overlap at this spacing: no such pair exists for this shape");
+        raise_domain_error("the coils would overlap at this spacing: no such pair exists for this shape");
     return spacing;
 }
 
@@ -73,14 +71,14 @@ double gradient_pair_spacing(const CoilSection& coil) {
 double pair_centre_field(const CoilSection& coil, double turns, double current, double spacing) {
     validate_shape(coil);
     check::non_negative(spacing, "spacing");
-    if (spacing < coil.length) throw DomainError("the coils overlap: spacing must be >= length");
+    if (spacing < coil.length) raise_domain_error("the coils overlap: spacing must be >= length");
     return 2.0 * axial_field(single(coil, turns, current), spacing / 2.0);
 }
 
 double gradient_pair_gradient(const CoilSection& coil, double turns, double current, double spacing) {
     validate_shape(coil);
     check::non_negative(spacing, "spacing");
-    if (spacing < coil.length) throw DomainError("the coils overlap: spacing must be >= length");
+    if (spacing < coil.length) raise_domain_error("the coils overlap: spacing must be >= length");
     // B(z) = Bs(z - s/2) - Bs(z + s/2), so B'(0) = Bs'(-s/2) - Bs'(s/2) = -2 Bs'(s/2).
     return -2.0 * axial_jet_n<2>(single(coil, turns, current), spacing / 2.0).c[1];
 }

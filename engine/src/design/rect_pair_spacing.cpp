@@ -13,11 +13,10 @@
 // is h / sqrt(3); the relative difference falls like 1.3 (short/long)^4 (measured against
 // mpmath), so beyond an aspect ratio of 1e4 that limit is returned directly.
 #include <algorithm>
-#include <boost/math/tools/roots.hpp>
 #include <cmath>
-#include <cstdint>
 
 #include "numerics/checks.hpp"
+#include "numerics/roots.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field/rect.hpp"
 
@@ -59,12 +58,8 @@ double rect_pair_spacing(double width, double height) {
         hi *= 2.0;
         f_hi = f(hi);
     }
-    if (!(f_lo < 0.0 && f_hi > 0.0)) throw ConvergenceError("rectangle pair spacing: no sign change of d2Bz/dz2 found");
-    std::uintmax_t iterations = 200;
-    const auto root = boost::math::tools::toms748_solve(f, lo, hi, f_lo, f_hi,
-                                                        boost::math::tools::eps_tolerance<double>(), iterations);
-    if (iterations >= 200) throw ConvergenceError("rectangle pair spacing: root finding did not converge");
-    const double z = 0.5 * (root.first + root.second);
+    if (!(f_lo < 0.0 && f_hi > 0.0)) raise_no_convergence("rectangle pair spacing: no sign change of d2Bz/dz2 found");
+    const double z = bracketed_root(f, lo, hi, f_lo, f_hi, "the rectangle pair-spacing root", 53);
     return check::finite_result(2.0 * z * s, "spacing");
 }
 

@@ -59,7 +59,7 @@ double first_crossing(const std::function<double(double)>& ratio, double toleran
     double lo = 0.0;
     for (StepBudget budget(kMaxScanSteps, "the outward scan"); lo < max_distance; budget.step()) {
         const double hi = lo + step(lo);
-        if (!(hi > lo)) raise_no_convergence("the outward scan (its step vanished)");
+        if (!(hi > lo)) raise_no_convergence("the outward scan stalled (its step vanished)");
         const double at_hi = excess(hi);
         if (at_hi > 0.0) {
             // The first crossing lies in (lo, hi]: refine it. Bisection when hi is a singular
@@ -78,7 +78,7 @@ double first_crossing(const std::function<double(double)>& ratio, double toleran
         }
         lo = hi;
     }
-    throw ConvergenceError("the field stays within the tolerance as far as the search goes");
+    raise_no_convergence("the field stays within the tolerance as far as the search goes");
 }
 
 }  // namespace coilwright::internal

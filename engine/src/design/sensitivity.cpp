@@ -18,7 +18,7 @@ using namespace internal;
 namespace {
 
 const CoilRow& row_at(const CoilTable& table, std::size_t index) {
-    if (index >= table.size()) throw DomainError("row " + std::to_string(index + 1) + " is not in the coil table");
+    if (index >= table.size()) raise_domain_error("row " + std::to_string(index + 1) + " is not in the coil table");
     return table.rows()[index];
 }
 
@@ -49,7 +49,7 @@ CoilTable perturbed(const CoilTable& table, std::size_t index, CoilParameter par
             break;
         case CoilParameter::Inner:
         case CoilParameter::Outer:
-            if (thin) throw DomainError("row " + std::to_string(table.label(index)) +
+            if (thin) raise_domain_error("row " + std::to_string(table.label(index)) +
                                         " is thin (inner = outer): use the parameter \"radius\"");
             (parameter == CoilParameter::Inner ? row.inner_radius : row.outer_radius) += delta;
             break;

@@ -24,7 +24,7 @@ CoilRow::Kind CoilRow::kind() const {
 
 void validate(const CoilRow& row, std::size_t label) {
     const std::string where = "row " + std::to_string(label) + ": ";
-    const auto fail = [&](const std::string& what) { throw DomainError(where + what); };
+    const auto fail = [&](const std::string& what) { raise_domain_error(where + what); };
     for (double v : {row.inner_radius, row.outer_radius, row.length, row.centre_z, row.turns, row.current})
         if (!std::isfinite(v)) fail("every value must be a finite number");
     if (!(row.inner_radius > 0.0)) fail("inner radius must be > 0");
@@ -35,8 +35,8 @@ void validate(const CoilRow& row, std::size_t label) {
 
 CoilTable::CoilTable(std::vector<CoilRow> rows, std::vector<std::size_t> row_labels)
     : rows_(std::move(rows)), labels_(std::move(row_labels)) {
-    if (labels_.size() != rows_.size()) throw DomainError("coil table: one label per row is needed");
-    if (rows_.empty()) throw DomainError("the coil table has no rows");
+    if (labels_.size() != rows_.size()) raise_domain_error("coil table: one label per row is needed");
+    if (rows_.empty()) raise_domain_error("the coil table has no rows");
     for (std::size_t i = 0; i < rows_.size(); ++i) validate(rows_[i], labels_[i]);
 }
 

@@ -30,9 +30,9 @@ FieldRZ flat_spiral_field(const FlatSpiralSpec& spiral, double z, double r) {
     check::non_negative(r, "r");
     const double a1 = spiral.inner_radius, a2 = spiral.outer_radius;
     if (a1 == a2) return loop_field({a1, spiral.turns, spiral.current}, z, r);
-    if (z == 0.0 && r >= a1 && r <= a2) throw SingularPointError("the point lies on the flat winding");
+    if (z == 0.0 && r >= a1 && r <= a2) raise_singular_point("the point lies on the flat winding");
     if (!std::isfinite(z / a1) || !std::isfinite(r / a1))
-        throw DomainError("the point is too far away compared with the inner radius");
+        raise_domain_error("the point is too far away compared with the inner radius");
     const auto loop = [&](double a, double a_minus_r) {
         return (1.0 / a) * internal::loop_field_normalized(z / a, r / a, a_minus_r / a);
     };

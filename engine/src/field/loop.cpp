@@ -42,7 +42,7 @@ FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
     const double kc = alpha / beta;
     // kc = 0 also when alpha / beta underflows (a point within 1e-323 radii of the wire, e.g.
     // radius 2e23 m, z = 1e-300 m, r = radius): the Gauss iteration from kc = 0 never ends.
-    if (!(kc > 0.0)) throw SingularPointError("the point lies on the current filament");
+    if (!(kc > 0.0)) raise_singular_point("the point lies on the current filament");
     const double k2 = (4.0 * r_n / beta) / beta;
 
     // State after the first Gauss step of cel(kc, kc^2, 1, 0) [index 0] and of
@@ -66,23 +66,19 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     // A prefactor in the subnormal range (radius 1e308 m, say) has lost its digits before the
     // field is formed; Br would come out as a silent 0 and Bz as a subnormal.
     if (scale != 0.0 && std::fabs(scale) < std::numeric_limits<double>::min())
-        throw DomainError("the field underflows below 2.2e-308 T: the radius is too large for the ampere-turns");
+        raise_domain_error("the field underflows below 2.2e-308 T: the radius is too large for the ampere-turns");
     // The fast kernel (shared with loop_field_batch, bit for bit) covers every point but those
     // farther than 1e50 radii or nearer the wire than 1e-100 radii, which take the long way.
     const double inv_a = 1.0 / a;
     const double z_n = z * inv_a, r_n = r * inv_a, one_minus_r = (a - r) * inv_a;
     if (!std::isfinite(z_n) || !std::isfinite(r_n))
-        throw DomainError("the point is more than 1e308 radii from the loop, beyond double precision");
+        raise_domain_error("the point is more than 1e308 radii from the loop, beyond double precision");
     FieldRZ f;
     if (internal::in_kernel_range<internal::ScalarLanes>(z_n, r_n, one_minus_r)) {
         using State = internal::KernelState<internal::ScalarLanes>;
         State s = State::start(z_n, r_n, one_minus_r);
-        int steps = 0;
-        for (; s.active(); ++steps) {
-            if (steps == internal::kMaxGaussSteps)
-                throw ConvergenceError("the elliptic-integral iteration did not converge");
+        for (StepBudget budget(kMaxGaussSteps, "the elliptic integral (Bulirsch's cel)"); s.active(); budget.step())
             s.step<true>(true);
-        }
         s.finish(scale, f.bz, f.br);
     } else {
         f = scale * internal::loop_field_normalized(z / a, r / a, (a - r) / a);

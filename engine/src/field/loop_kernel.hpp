@@ -32,8 +32,9 @@ namespace coilwright::internal {
 // outside (farther than 1e50 radii, closer to the wire than 1e-100 radii) the careful way.
 inline constexpr double kKernelReach = 1e50;
 inline constexpr double kKernelNearest2 = 1e-200;
-// Gauss steps the kernel may take: kc >= 1e-100 needs fewer than 15; the cap only bounds the work.
-inline constexpr int kMaxGaussSteps = 40;
+// Gauss steps the kernel may take: kc >= 1e-100 needs fewer than 15; the cap (the scalar
+// iteration's, bulirsch_cel.hpp) only bounds the work.
+inline constexpr int kMaxGaussSteps = kCelMaxSteps;
 
 // Lane operations for one point.
 struct ScalarLanes {

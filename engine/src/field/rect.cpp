@@ -48,7 +48,7 @@ namespace {
 constexpr double kPointDipole = 1e30;
 
 [[noreturn]] void on_filament() {
-    throw SingularPointError("the point lies on a side of the rectangle (the current filament)");
+    raise_singular_point("the point lies on a side of the rectangle (the current filament)");
 }
 
 // [R Q^2] for R, Q = sqrt(t^2 + d) at the two distances a, b ([R] = 1/(Ra + Rb), [Q^2] = 1),

@@ -138,44 +138,17 @@ struct EndGeometry {
 EndGeometry end_geometry(double zeta, double r, double one_minus_r) {
     const double alpha = norm2(one_minus_r, zeta);
     const double beta = norm2(1.0 + r, zeta);
-    if (alpha == 0.0) throw SingularPointError("the point lies on the rim of the current sheet");
+    if (alpha == 0.0) raise_singular_point("the point lies on the rim of the current sheet");
     return {beta, alpha / beta, zeta / beta, (4.0 * r / beta) / beta};
 }
 
-// Bulirsch's iteration (bulirsch_cel.hpp) for N integrands that share kc, each with its own p:
-// the two end terms of one end share the costly part (one square root per step).
+// -cel(kc, 1, 1, -1) / k^2 of item 1: after the first step a = 0, b = 2 / (1 + kc), p = 1 + kc.
 template <std::size_t N>
-struct CelShared {
-    double qc, em, g, e;
-    std::array<double, N> p, a, b;
-
-    // The state after the first Gauss step done by hand, for modulus kc.
-    explicit CelShared(double kc) : qc(kc), em(1.0 + kc), g(1.0), e(kc), p{}, a{}, b{} {}
-
-    std::array<double, N> finish() {
-        while (std::fabs(g - qc) > g * kCelTolerance) {
-            qc = 2.0 * std::sqrt(e);
-            e = qc * em;
-            for (std::size_t i = 0; i < N; ++i) {
-                const double inv_p = 1.0 / p[i], ge = e * inv_p, f = a[i];
-                a[i] += b[i] * inv_p;
-                b[i] = 2.0 * (b[i] + f * ge);
-                p[i] += ge;
-            }
-            g = em;
-            em += qc;
-        }
-        std::array<double, N> out{};
-        for (std::size_t i = 0; i < N; ++i) out[i] = kHalfPi * (b[i] + a[i] * em) / (em * (em + p[i]));
-        return out;
-    }
-    // -cel(kc, 1, 1, -1) / k^2: after the first step a = 0, b = 2 / (1 + kc), p = 1 + kc (item 1).
-    void set_vector(std::size_t i, double kc) {
-        p[i] = 1.0 + kc;
-        a[i] = 0.0;
-        b[i] = 2.0 / (1.0 + kc);
-    }
-};
+void set_vector(CelLoop<N>& c, std::size_t i, double kc) {
+    c.p[i] = 1.0 + kc;
+    c.a[i] = 0.0;
+    c.b[i] = 2.0 / (1.0 + kc);
+}
 
 // The two end terms at axial distance zeta >= 0 from one end of the unit sheet:
 //   axial  = G (the sheet's own field) for r <= 1, W = Omega / (4 pi) for r > 1;
@@ -199,11 +172,11 @@ EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, b
         // G = prefactor * cel(kc, g^2, 1, g), g = gamma > 0, first Gauss step by hand from
         // p = g, a = 1, b / p = 1: every term stays positive.
         const double g = one_minus_r / (1.0 + r);
-        CelShared<2> c(kc);
+        auto c = CelLoop<2>::after_first_step(kc);
         c.p[0] = g + kc / g;
         c.a[0] = 1.0 + 1.0 / g;
         c.b[0] = 2.0 * (1.0 + kc / g);
-        c.set_vector(1, kc);
+        set_vector(c, 1, kc);
         const auto v = c.finish();
         out.axial = prefactor * v[0];
         if (want_vector) out.vector = vector_scale * v[1];
@@ -212,11 +185,11 @@ EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, b
     if (want_axial && one_minus_r == 0.0) {
         // r = 1: the limit gamma -> 0+ of the Derby-Olbert form, G = 1/4 + kc K(kc) / (2 pi);
         // K = cel(kc, 1, 1, 1) after its first step shares p = 1 + kc with A.
-        CelShared<2> c(kc);
+        auto c = CelLoop<2>::after_first_step(kc);
         c.p[0] = 1.0 + kc;
         c.a[0] = 2.0;
         c.b[0] = 2.0 * (1.0 + kc);
-        c.set_vector(1, kc);
+        set_vector(c, 1, kc);
         const auto v = c.finish();
         out.axial = 0.25 + kc * v[0] * (0.5 * kInvPi);
         if (want_vector) out.vector = vector_scale * v[1];
@@ -227,11 +200,11 @@ EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, b
         const double g = -one_minus_r / (1.0 + r);  // -gamma > 0
         const double delta = 2.0 / (1.0 + r);       // 1 - g, exact
         const double kc_minus_g = ((4.0 * r / (1.0 + r)) * (e.zeta_over_beta * e.zeta_over_beta) / (1.0 + r)) / (kc + g);
-        CelShared<3> c(kc);
+        auto c = CelLoop<3>::after_first_step(kc);
         c.p[0] = c.p[1] = g + kc / g;
         c.a[0] = 1.0;
         c.b[1] = 1.0;
-        c.set_vector(2, kc);
+        set_vector(c, 2, kc);
         const auto v = c.finish();
         out.axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
         if (want_vector) out.vector = vector_scale * v[2];
@@ -239,8 +212,8 @@ EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, b
     }
     if (want_axial) out.axial = disk_part_by_sum(zeta, r);  // r > 1, far along the axis direction
     if (want_vector) {
-        CelShared<1> c(kc);
-        c.set_vector(0, kc);
+        auto c = CelLoop<1>::after_first_step(kc);
+        set_vector(c, 0, kc);
         out.vector = vector_scale * c.finish()[0];
     }
     return out;
@@ -274,7 +247,7 @@ FieldRZ sheet_field_normalized(const SheetPoint& p, double max_loss, Components 
     const double sign = p.z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
     const double z = std::fabs(p.z), r = p.r, one_minus_r = p.one_minus_r, h = p.h;
     const double beyond = p.beyond_end;  // |z| - h, exact
-    if (one_minus_r == 0.0 && beyond <= 0.0) throw SingularPointError("the point lies on the current sheet");
+    if (one_minus_r == 0.0 && beyond <= 0.0) raise_singular_point("the point lies on the current sheet");
     const std::complex<double> pole{0.0, std::fabs(one_minus_r)};
     const bool inside_radius = one_minus_r >= 0.0;
     const double min_split_k2 = std::min(kSplitMinK2, 10.0 / max_loss);
@@ -345,7 +318,7 @@ FieldRZ solenoid_field(const SolenoidSpec& solenoid, double z, double r, Compone
     const double a = solenoid.radius;
     const double z_n = z / a, r_n = r / a, h_n = 0.5 * solenoid.length / a;
     if (!std::isfinite(z_n) || !std::isfinite(r_n) || !std::isfinite(h_n))
-        throw DomainError("the point or the length is too large compared with the radius");
+        raise_domain_error("the point or the length is too large compared with the radius");
     const FieldRZ unit = internal::sheet_field_normalized(internal::SheetPoint::of(z, r, a, 0.5 * solenoid.length), 4.0, want);
     const double scale = kMu0 * (solenoid.turns / solenoid.length) * solenoid.current;
     const FieldRZ f = scale * unit;

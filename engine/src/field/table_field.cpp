@@ -25,7 +25,7 @@ FieldRZ row_field(const CoilRow& row, double z, double r) {
         case CoilRow::Kind::Thick:
             return thick_coil_field({row.inner_radius, row.outer_radius, row.length, row.turns, row.current}, dz, r);
     }
-    throw DomainError("unknown coil kind");
+    raise_domain_error("unknown coil kind");
 }
 
 double row_cost(const CoilRow& row) {
@@ -48,7 +48,7 @@ FieldRZ table_field(const CoilTable& table, double z, double r) {
         try {
             total += row_field(table.rows()[i], z, r);
         } catch (const SingularPointError& e) {
-            throw SingularPointError("row " + std::to_string(table.label(i)) + ": " + e.what());
+            raise_singular_point("row " + std::to_string(table.label(i)) + ": " + e.what());
         }
     }
     check::finite_result(total.bz, "Bz");

@@ -84,7 +84,7 @@ FieldRZ thick_coil_field(const ThickCoilSpec& coil, double z, double r, Componen
         return solenoid_field({coil.inner_radius, coil.length, coil.turns, coil.current}, z, r, want);
     const double a1 = coil.inner_radius, a2 = coil.outer_radius, h = 0.5 * coil.length;
     if (!std::isfinite(z / a1) || !std::isfinite(r / a1) || !std::isfinite(h / a1))
-        throw DomainError("the point or the length is too large compared with the inner radius");
+        raise_domain_error("the point or the length is too large compared with the inner radius");
     // Current density times mu0; the radial integral carries the unit of length.
     const double mu0_j = kMu0 * coil.turns * coil.current / ((a2 - a1) * coil.length);
     const FieldRZ unit = internal::thick_field_per_density(a1, a2, h, z, r, want);

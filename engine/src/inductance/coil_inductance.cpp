@@ -45,7 +45,7 @@ void check_pair(const CoilSection& w1, const CoilSection& w2, double distance) {
     check::finite(distance, "distance");
     const double reach = std::max({w1.length, w2.length, std::fabs(distance)});
     if (reach > kMaxProportion * std::max(w1.outer_radius, w2.outer_radius))
-        throw DomainError("a length or the distance is more than a million times the larger outer radius: "
+        raise_domain_error("a length or the distance is more than a million times the larger outer radius: "
                           "outside the accurate range");
 }
 
@@ -119,7 +119,7 @@ double slope_normalised(const CoilSection& w1, const CoilSection& w2, double dis
     if (h1 == 0.0 && h2 == 0.0) {
         if (distance == 0.0) {
             if (w1.inner_radius == w1.outer_radius && w2.inner_radius == w2.outer_radius && w1.inner_radius == w2.inner_radius)
-                throw SingularPointError("the two loops coincide: the force between them is undefined");
+                raise_singular_point("the two loops coincide: the force between them is undefined");
             return 0.0;  // flat windings in one plane: no axial force, by symmetry
         }
         OffsetWeights u;
@@ -151,7 +151,7 @@ double coil_self_inductance(const CoilSection& shape) {
     validate(shape);
     if (shape.inner_radius == shape.outer_radius) {
         if (shape.length == 0.0)
-            throw DomainError("a loop's self-inductance depends on its wire diameter (use LOOP_L)");
+            raise_domain_error("a loop's self-inductance depends on its wire diameter (use LOOP_L)");
         return solenoid_inductance(shape.inner_radius, shape.length, 1.0);
     }
     return coil_mutual_inductance(shape, shape, 0.0);

@@ -33,7 +33,7 @@ namespace internal {
 
 double filament_mutual(double r1, double r2, double diff, double u) {
     const double alpha = std::hypot(diff, u);
-    if (alpha == 0.0) throw SingularPointError("the two circles coincide: their mutual inductance is infinite");
+    if (alpha == 0.0) raise_singular_point("the two circles coincide: their mutual inductance is infinite");
     // Order the radii so that M(a, b) and M(b, a) are bitwise equal.
     const double lo = std::min(r1, r2), hi = std::max(r1, r2);
     const double beta = std::hypot(lo + hi, u);
@@ -67,7 +67,7 @@ double loop_mutual_inductance(double a, double b, double distance) {
 double loop_mutual_inductance_slope(double a, double b, double distance) {
     check_pair(a, b, distance);
     if (a == b && distance == 0.0)
-        throw SingularPointError("the two circles coincide: the force between them is undefined");
+        raise_singular_point("the two circles coincide: the force between them is undefined");
     return check::finite_result(internal::filament_mutual_slope(a, b, a - b, distance), "dM/dz");
 }
 

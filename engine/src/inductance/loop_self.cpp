@@ -26,7 +26,7 @@ double loop_self_inductance(double radius, double wire_diameter, double turns) {
     check::positive(wire_diameter, "wire diameter");
     check::non_negative(turns, "turns");
     if (wire_diameter > radius)
-        throw DomainError("wire diameter must not exceed the loop radius (thin-ring formula)");
+        raise_domain_error("wire diameter must not exceed the loop radius (thin-ring formula)");
     const double rho = 0.5 * wire_diameter / radius;  // wire radius in units of the loop radius
     const double log_term = std::log(8.0 / rho);
     const double per_radius = (1.0 + rho * rho / 8.0) * log_term - 1.75 + rho * rho / 24.0;

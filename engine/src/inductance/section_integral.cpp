@@ -22,6 +22,7 @@
 // below 1e-16 (with logarithmic singularities, what they hold is then negligible). Measured
 // against independent references: about 1e-15 relative. The kernel evaluations per call are
 // bounded (ConvergenceError beyond).
+#include "numerics/policy.hpp"
 #include "inductance/section_integral.hpp"
 
 #include <algorithm>
@@ -30,7 +31,7 @@
 
 #include "coilwright/errors.hpp"
 #include "inductance/filament_kernels.hpp"
-#include "numerics/gauss_rule_unit.hpp"
+#include "numerics/gauss_legendre.hpp"
 
 namespace coilwright::internal {
 
@@ -51,7 +52,7 @@ void OffsetWeights::add_piece(double lo, double hi, double w_lo, double w_hi, in
             return;
         }
     }
-    if (piece_count == static_cast<int>(pieces.size())) throw std::logic_error("too many offset pieces");
+    if (piece_count == static_cast<int>(pieces.size())) raise_no_convergence("the inductance integral needs more offset pieces than it holds");
     pieces[piece_count++] = piece;
 }
 
@@ -66,7 +67,7 @@ void OffsetWeights::add_point(double u, double mass, int parity) {
             return;
         }
     }
-    if (point_count == static_cast<int>(points.size())) throw std::logic_error("too many offset points");
+    if (point_count == static_cast<int>(points.size())) raise_no_convergence("the inductance integral needs more offset points than it holds");
     points[point_count++] = {u, mass};
 }
 
@@ -134,7 +135,7 @@ public:
     }
 
     double integrate(const Vec3& lo, const Vec3& hi, int depth = 0) {
-        if (depth > kMaxDepth) throw ConvergenceError("the inductance integral does not settle for these sizes");
+        if (depth > kMaxDepth) raise_no_convergence("the inductance integral does not settle for these sizes");
         // Lower bounds over the box of the radial gap |r1 - r2| and of r1 + r2. The kernel is
         // singular where (r1 - r2)^2 + u^2 = 0 (coincidence) and where (r1 + r2)^2 + u^2 = 0
         // (the mirror filament): lower bounds of the distances to these, in any direction, are
@@ -248,9 +249,9 @@ private:
     }
 
     double gauss(const Vec3& lo, const Vec3& hi, const std::array<int, 3>& order) {
-        const GaussRule& g0 = gauss_legendre(order[0]);
-        const GaussRule& g1 = gauss_legendre(order[1]);
-        const GaussRule& g2 = gauss_legendre(order[2]);
+        const GaussRule& g0 = gauss_rule(order[0]);
+        const GaussRule& g1 = gauss_rule(order[1]);
+        const GaussRule& g2 = gauss_rule(order[2]);
         // Inactive dimensions are fixed coordinates (lo == hi) with weight 1.
         const auto node = [&](const GaussRule& g, int i, int k, double& weight) {
             if (!c_.active[i]) {
@@ -279,7 +280,7 @@ private:
         }
         budget_ -= static_cast<long>(g0.n) * g1.n * g2.n;
         if (budget_ < 0)
-            throw ConvergenceError("the inductance integral needs more work than one call may do");
+            raise_no_convergence("the inductance integral needs more work than one call may do");
         return total;
     }
 
@@ -335,7 +336,7 @@ double integrate_offsets(const Cell& radial, double factor, const OffsetWeights&
         if (point.mass == 0.0) continue;
         Cell cell = radial;
         if (cell.kind == Cell::Kind::Diagonal && cell.w == 0.0 && point.u == 0.0)
-            throw SingularPointError("two circles of the windings coincide: the result is infinite");
+            raise_singular_point("two circles of the windings coincide: the result is infinite");
         cell.u_fixed = true;
         cell.u0 = cell.lo[2] = cell.hi[2] = point.u;
         total += factor * point.mass * integrate_cell(cell, budget);

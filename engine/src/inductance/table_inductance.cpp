@@ -3,7 +3,6 @@
 #include "coilwright/inductance/table.hpp"
 
 #include <cmath>
-#include <exception>
 #include <limits>
 #include <string>
 
@@ -26,22 +25,32 @@ std::string row_name(const CoilTable& table, Eigen::Index i) {
     return "row " + std::to_string(table.label(static_cast<std::size_t>(i)));
 }
 
+std::string pair_name(const CoilTable& table, Eigen::Index i, Eigen::Index j) {
+    return row_name(table, i) + " and " + row_name(table, j) + ": ";
+}
+
 MatrixWithProblems empty(Eigen::Index rows, Eigen::Index cols) {
     MatrixWithProblems m;
     m.values = Eigen::MatrixXd::Zero(rows, cols);
-    m.problems.assign(static_cast<std::size_t>(rows * cols), std::string());
+    m.problems.assign(static_cast<std::size_t>(rows * cols), Problem{});
     return m;
 }
 
-void set_problem(MatrixWithProblems& m, Eigen::Index i, Eigen::Index j, const std::string& why) {
+void set_problem(MatrixWithProblems& m, Eigen::Index i, Eigen::Index j, const Problem& why) {
     m.values(i, j) = kNaN;
     m.problems[static_cast<std::size_t>(i * m.values.cols() + j)] = why;
+}
+
+// The first problem of a pair is kept on both rows of a force column.
+void mark_pair(MatrixWithProblems& f, Eigen::Index i, Eigen::Index j, const Problem& why) {
+    if (f.valid(i, 0)) set_problem(f, i, 0, why);
+    if (f.valid(j, 0)) set_problem(f, j, 0, why);
 }
 
 double self_inductance(const CoilRow& row, std::optional<double> loop_wire_diameter) {
     if (row.kind() == CoilRow::Kind::Loop) {
         if (!loop_wire_diameter)
-            throw DomainError("a loop's self-inductance needs the wire diameter (the optional argument)");
+            raise_domain_error("a loop's self-inductance needs the wire diameter (the optional argument)");
         return loop_self_inductance(row.inner_radius, *loop_wire_diameter, row.turns);
     }
     return row.turns * row.turns * coil_self_inductance(shape(row));
@@ -58,8 +67,10 @@ MatrixWithProblems inductance_matrix(const CoilTable& table, std::optional<doubl
         const CoilRow& ri = rows[static_cast<std::size_t>(i)];
         try {
             m.values(i, i) = ri.turns == 0.0 ? 0.0 : self_inductance(ri, loop_wire_diameter);
-        } catch (const std::exception& e) {
-            set_problem(m, i, i, row_name(table, i) + ": " + e.what());
+        } catch (const DomainError& e) {
+            set_problem(m, i, i, Problem::domain(row_name(table, i) + ": ", e));
+        } catch (const ConvergenceError& e) {
+            set_problem(m, i, i, Problem::convergence(row_name(table, i) + ": ", e));
         }
         for (Eigen::Index j = i + 1; j < n; ++j) {
             const CoilRow& rj = rows[static_cast<std::size_t>(j)];
@@ -68,8 +79,12 @@ MatrixWithProblems inductance_matrix(const CoilTable& table, std::optional<doubl
                 const double mij =
                     nn == 0.0 ? 0.0 : nn * coil_mutual_inductance(shape(ri), shape(rj), rj.centre_z - ri.centre_z);
                 m.values(i, j) = m.values(j, i) = check::finite_result(mij, "the mutual inductance");
-            } catch (const std::exception& e) {
-                const std::string why = row_name(table, i) + " and " + row_name(table, j) + ": " + e.what();
+            } catch (const DomainError& e) {
+                const Problem why = Problem::domain(pair_name(table, i, j), e);
+                set_problem(m, i, j, why);
+                set_problem(m, j, i, why);
+            } catch (const ConvergenceError& e) {
+                const Problem why = Problem::convergence(pair_name(table, i, j), e);
                 set_problem(m, i, j, why);
                 set_problem(m, j, i, why);
             }
@@ -95,8 +110,8 @@ double quadratic_form(const CoilTable& table, const Eigen::VectorXd& w, std::opt
     if (used.empty()) return 0.0;
     const CoilTable sub(used, labels);
     const MatrixWithProblems m = inductance_matrix(sub, loop_wire_diameter);
-    for (std::size_t k = 0; k < m.problems.size(); ++k)
-        if (!m.problems[k].empty()) throw DomainError(m.problems[k]);
+    for (const Problem& problem : m.problems)
+        if (problem) problem.raise();
     const Eigen::Map<const Eigen::VectorXd> v(weights.data(), static_cast<Eigen::Index>(weights.size()));
     return v.dot(m.values * v);
 }
@@ -111,7 +126,7 @@ double series_inductance(const CoilTable& table, std::optional<double> loop_wire
         polarity[static_cast<Eigen::Index>(i)] = current > 0.0 ? 1.0 : current < 0.0 ? -1.0 : 0.0;
         any = any || current != 0.0;
     }
-    if (!any) throw DomainError("no row carries current: the signs of the currents set which rows are in series");
+    if (!any) raise_domain_error("no row carries current: the signs of the currents set which rows are in series");
     return check::finite_result(quadratic_form(table, polarity, loop_wire_diameter), "the inductance");
 }
 
@@ -137,15 +152,16 @@ MatrixWithProblems axial_forces(const CoilTable& table) {
                 const double fj = check::finite_result(scale * slope, "the force");
                 f.values(j, 0) += fj;
                 f.values(i, 0) -= fj;
-            } catch (const std::exception& e) {
-                const std::string why = row_name(table, i) + " and " + row_name(table, j) + ": " + e.what();
-                if (f.valid(i, 0)) set_problem(f, i, 0, why);
-                if (f.valid(j, 0)) set_problem(f, j, 0, why);
+            } catch (const DomainError& e) {
+                mark_pair(f, i, j, Problem::domain(pair_name(table, i, j), e));
+            } catch (const ConvergenceError& e) {
+                mark_pair(f, i, j, Problem::convergence(pair_name(table, i, j), e));
             }
         }
     }
     for (Eigen::Index i = 0; i < n; ++i)
-        if (f.valid(i, 0) && !std::isfinite(f.values(i, 0))) set_problem(f, i, 0, row_name(table, i) + ": the force is not finite");
+        if (f.valid(i, 0) && !std::isfinite(f.values(i, 0)))
+            set_problem(f, i, 0, {Problem::Kind::Domain, row_name(table, i) + ": the force is not finite"});
     return f;
 }
 

@@ -1,18 +1,33 @@
-// Gauss-Legendre quadrature of analytic integrands, with the node count chosen from how far
-// the nearest complex singularity lies from the interval.
+// Gauss-Legendre quadrature: rules of any order up to 20 on [0, 1] (gauss_rule), and analytic
+// integrands integrated with the node count chosen from how far the nearest complex
+// singularity lies from the interval (gauss_legendre).
 //
 // For f analytic inside the Bernstein ellipse with foci at the interval ends and parameter rho
 // (the sum of its half-axes over the half-width), the n-point Gauss-Legendre error falls like
 // rho^(-2n) (L. N. Trefethen, Approximation Theory and Approximation Practice, SIAM 2013,
-// ch. 19). The rules are Boost.Math's precomputed ones (7, 10, 15, 20, 25, 30 points).
+// ch. 19). gauss_legendre uses Boost.Math's precomputed rules (7, 10, 15, 20, 25, 30 points);
+// gauss_rule builds its rules once by Newton's method (gauss_legendre.cpp).
 #pragma once
 
+#include <array>
 #include <boost/math/quadrature/gauss.hpp>
 #include <cmath>
 #include <complex>
 #include <cstddef>
 
 namespace coilwright::internal {
+
+inline constexpr int kMaxGaussOrder = 20;
+
+struct GaussRule {
+    int n = 0;
+    std::array<double, kMaxGaussOrder> x{};  // nodes in (0, 1)
+    std::array<double, kMaxGaussOrder> w{};  // weights, summing to 1
+};
+
+// The n-point rule, 1 <= n <= kMaxGaussOrder.
+const GaussRule& gauss_rule(int n);
+
 
 // Bernstein parameter rho >= 1 of the ellipse through `pole` for the interval
 // [centre - half_width, centre + half_width]: with the foci at the ends, the ellipse through w

@@ -16,10 +16,8 @@ namespace coilwright::internal {
 // A point where the field is singular, or a result that is not representable.
 [[noreturn]] inline void raise_singular_point(const std::string& message) { throw SingularPointError(message); }
 
-// An iterative method that did not reach its tolerance within its budget.
-[[noreturn]] inline void raise_no_convergence(const std::string& method) {
-    throw ConvergenceError(method + " did not converge");
-}
+// An iterative method that did not reach its tolerance, or a search that found nothing.
+[[noreturn]] inline void raise_no_convergence(const std::string& message) { throw ConvergenceError(message); }
 
 // The step count of one iterative loop: `for (StepBudget budget(64, "what"); cond; budget.step())`.
 // step() raises ConvergenceError naming the method once max_steps steps have been taken.
@@ -27,7 +25,7 @@ class StepBudget {
 public:
     constexpr StepBudget(int max_steps, const char* method) : left_(max_steps), method_(method) {}
     void step() {
-        if (--left_ < 0) raise_no_convergence(method_);
+        if (--left_ < 0) raise_no_convergence(std::string(method_) + " did not converge");
     }
     int left() const { return left_; }
 

@@ -6,6 +6,7 @@
 #include <boost/math/tools/minima.hpp>
 #include <boost/math/tools/roots.hpp>
 #include <cstdint>
+#include <string>
 #include <utility>
 
 #include "numerics/policy.hpp"
@@ -21,7 +22,7 @@ double bracketed_root(F&& f, double lo, double hi, double f_lo, double f_hi, con
     std::uintmax_t iterations = kMaxRootIterations;
     const auto [a, b] = boost::math::tools::toms748_solve(f, lo, hi, f_lo, f_hi,
                                                           boost::math::tools::eps_tolerance<double>(bits), iterations);
-    if (iterations >= kMaxRootIterations) raise_no_convergence(what);
+    if (iterations >= kMaxRootIterations) raise_no_convergence(std::string(what) + " did not converge");
     return 0.5 * (a + b);
 }
 
@@ -35,7 +36,7 @@ template <class F>
 std::pair<double, double> bracketed_minimum(F&& f, double lo, double hi, const char* what, int bits = 40) {
     std::uintmax_t iterations = kMaxRootIterations;
     const auto found = boost::math::tools::brent_find_minima(f, lo, hi, bits, iterations);
-    if (iterations >= kMaxRootIterations) raise_no_convergence(what);
+    if (iterations >= kMaxRootIterations) raise_no_convergence(std::string(what) + " did not converge");
     return found;
 }
 

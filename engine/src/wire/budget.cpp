@@ -16,7 +16,7 @@ namespace {
 void check_temperature(double t, const char* name) {
     check::finite(t, name);
     if (t < kMinConductorTemperature || t > kMaxConductorTemperature)
-        throw DomainError(std::string(name) + " must lie between -100 and 400 C");
+        raise_domain_error(std::string(name) + " must lie between -100 and 400 C");
 }
 
 void check_cooling(double area, double h, double ambient_c) {
@@ -28,7 +28,7 @@ void check_cooling(double area, double h, double ambient_c) {
 HotState settle(double r20, double rise, double ambient_c, Conductor c) {
     const double t = ambient_c + rise;
     if (!(t <= kMaxConductorTemperature))
-        throw DomainError("the winding would settle above 400 C, far beyond every insulation class: reduce the load");
+        raise_domain_error("the winding would settle above 400 C, far beyond every insulation class: reduce the load");
     return {t, r20 * (1.0 + conductor_data(c).temp_coefficient * (t - 20.0))};
 }
 
@@ -89,7 +89,7 @@ HotState hot_state_at_current(double r20, double current, double area, double am
     const double alpha = conductor_data(c).temp_coefficient;
     const double k = current * current * r20 / (h * area);  // K: rise per unit of R / R20
     if (!std::isfinite(k) || alpha * k >= 1.0)
-        throw DomainError("thermal runaway: at this current the resistance, and with it the heating, grows faster "
+        raise_domain_error("thermal runaway: at this current the resistance, and with it the heating, grows faster "
                           "than the cooling; there is no steady temperature");
     const double rise = k * (1.0 + alpha * (ambient_c - 20.0)) / (1.0 - alpha * k);
     return settle(r20, rise, ambient_c, c);
@@ -102,7 +102,7 @@ HotState hot_state_at_voltage(double r20, double voltage, double area, double am
     const double alpha = conductor_data(c).temp_coefficient;
     const double ra = 1.0 + alpha * (ambient_c - 20.0);                // R(Ta) / R20
     const double q = (voltage / r20) * voltage / (h * area);           // K
-    if (!std::isfinite(q)) throw DomainError("the voltage is too large for this winding");
+    if (!std::isfinite(q)) raise_domain_error("the voltage is too large for this winding");
     // alpha rise^2 + ra rise - q = 0, positive root written without cancellation.
     const double rise = 2.0 * q / (ra + std::sqrt(ra * ra + 4.0 * alpha * q));
     return settle(r20, rise, ambient_c, c);
@@ -112,7 +112,7 @@ double coil_max_current(double r20, double area, double max_temperature_c, doubl
     check::positive(r20, "resistance at 20 C");
     check_cooling(area, h, ambient_c);
     check_temperature(max_temperature_c, "maximum temperature");
-    if (!(max_temperature_c > ambient_c)) throw DomainError("maximum temperature must be above the ambient temperature");
+    if (!(max_temperature_c > ambient_c)) raise_domain_error("maximum temperature must be above the ambient temperature");
     const double r_max = r20 * (1.0 + conductor_data(c).temp_coefficient * (max_temperature_c - 20.0));
     return check::finite_result(std::sqrt(h * area * (max_temperature_c - ambient_c) / r_max), "current");
 }
@@ -121,7 +121,7 @@ double insulation_class_limit(double thermal_class) {
     // IEC 60085 thermal classes (C).
     for (double k : {90.0, 105.0, 120.0, 130.0, 155.0, 180.0, 200.0, 220.0, 250.0})
         if (thermal_class == k) return k;
-    throw DomainError("thermal class must be an IEC 60085 class: 90 (Y), 105 (A), 120 (E), 130 (B), 155 (F), "
+    raise_domain_error("thermal class must be an IEC 60085 class: 90 (Y), 105 (A), 120 (E), 130 (B), 155 (F), "
                       "180 (H), 200 (N), 220 (R) or 250");
 }
 

@@ -22,13 +22,13 @@ const ConductorData& conductor_data(Conductor c) { return c == Conductor::Copper
 Conductor conductor_from_index(double index) {
     if (index == 0.0) return Conductor::Copper;
     if (index == 1.0) return Conductor::Aluminium;
-    throw DomainError("material must be copper or aluminium");
+    raise_domain_error("material must be copper or aluminium");
 }
 
 double resistivity(Conductor c, double temperature_c) {
     check::finite(temperature_c, "temperature");
     if (temperature_c < kMinConductorTemperature || temperature_c > kMaxConductorTemperature)
-        throw DomainError("temperature must lie between -100 and 400 C (the range of the linear resistance law)");
+        raise_domain_error("temperature must lie between -100 and 400 C (the range of the linear resistance law)");
     const ConductorData& d = conductor_data(c);
     return d.resistivity_20 * (1.0 + d.temp_coefficient * (temperature_c - 20.0));
 }
@@ -52,7 +52,7 @@ double wire_mass(double diameter, double length, Conductor c) {
 double wire_diameter_for_current(double current, double current_density) {
     check::finite(current, "current");
     check::positive(current_density, "current density");
-    if (current == 0.0) throw DomainError("current must not be 0 (any wire carries no current)");
+    if (current == 0.0) raise_domain_error("current must not be 0 (any wire carries no current)");
     return check::finite_result(std::sqrt(4.0 * std::fabs(current) / (kPi * current_density)), "diameter");
 }
 

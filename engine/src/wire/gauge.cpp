@@ -5,8 +5,11 @@
 #include <string>
 
 #include "coilwright/errors.hpp"
+#include "numerics/policy.hpp"
 
 namespace coilwright {
+
+using namespace internal;
 
 namespace {
 constexpr double kInch = 0.0254;
@@ -28,13 +31,13 @@ double parse_awg_gauge(std::string_view text) {
     if (t.size() >= 2 && t.size() <= 4 && t.find_first_not_of('0') == std::string_view::npos)
         return 1.0 - static_cast<double>(t.size());
     if (t.empty() || t.size() > 3 || t.find_first_not_of("0123456789") != std::string_view::npos)
-        throw DomainError(bad);
+        raise_domain_error(bad);
     return std::stod(std::string(t));
 }
 
 double awg_diameter(double gauge) {
     if (!std::isfinite(gauge) || gauge != std::floor(gauge) || gauge < kMinGauge || gauge > kMaxGauge)
-        throw DomainError("gauge must be a whole AWG number from -3 (4/0) to 56");
+        raise_domain_error("gauge must be a whole AWG number from -3 (4/0) to 56");
     return 0.005 * kInch * std::pow(92.0, (36.0 - gauge) / 39.0);
 }
 

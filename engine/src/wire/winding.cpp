@@ -23,7 +23,7 @@ double whole(double x) { return std::floor(x * (1.0 + kFitTolerance)); }
 
 double checked_count(double n, const char* what) {
     if (!(n <= kMaxCount))
-        throw DomainError(std::string("more than 1e9 ") + what + " (check the units: metres)");
+        raise_domain_error(std::string("more than 1e9 ") + what + " (check the units: metres)");
     return n;
 }
 
@@ -38,7 +38,7 @@ LayerTurns layer_turns(double length, double d, Packing packing) {
     // Below 1.5 d the second layer has no groove to lie in: the winding is not hexagonal.
     const double even = whole(length / d - 0.5);
     if (odd > 0.0 && !(even >= 1.0))
-        throw DomainError("hexagonal packing needs a winding length of at least 1.5 wire diameters");
+        raise_domain_error("hexagonal packing needs a winding length of at least 1.5 wire diameters");
     return {odd, even};
 }
 
@@ -46,14 +46,14 @@ double pitch(double d, Packing packing) { return packing == Packing::Square ? d 
 
 double whole_turns(double turns) {
     check::non_negative(turns, "turns");
-    if (turns != std::floor(turns)) throw DomainError("turns must be a whole number for a layer winding");
+    if (turns != std::floor(turns)) raise_domain_error("turns must be a whole number for a layer winding");
     return turns;
 }
 
 // Layers needed for n turns: full pairs of (odd, even) layers, then what is left.
 double layers_for(double n, const LayerTurns& t) {
     if (n == 0.0) return 0.0;
-    if (t.odd == 0.0) throw DomainError("the wire is thicker than the winding length: no turn fits");
+    if (t.odd == 0.0) raise_domain_error("the wire is thicker than the winding length: no turn fits");
     const double pair = t.odd + t.even;
     const double pairs = std::floor(n / pair);
     const double rest = n - pairs * pair;
@@ -65,7 +65,7 @@ double layers_for(double n, const LayerTurns& t) {
 Packing packing_from_index(double index) {
     if (index == 0.0) return Packing::Square;
     if (index == 1.0) return Packing::Hexagonal;
-    throw DomainError("packing must be square or hexagonal");
+    raise_domain_error("packing must be square or hexagonal");
 }
 
 double winding_layers(double build, double wire_diameter, Packing packing) {
@@ -134,7 +134,7 @@ double winding_fill(double turns, double bare_diameter, double build, double len
     check::positive(length, "length");
     const double fill = turns * (0.25 * kPi * bare_diameter * bare_diameter) / (build * length);
     if (!(fill <= kDensestFill * (1.0 + kFitTolerance)))
-        throw DomainError("these turns cannot fit in the window: the fill would exceed 0.9069, the densest packing of round wire");
+        raise_domain_error("these turns cannot fit in the window: the fill would exceed 0.9069, the densest packing of round wire");
     return fill;
 }
 

@@ -7,15 +7,16 @@
 #include <vector>
 
 #include "coilwright/coil_table.hpp"
+#include "coilwright/errors.hpp"
 
 namespace coilwright {
 
-// Values with a reason for each one that could not be computed (empty where valid).
+// Values with the error of each one that could not be computed (none where valid).
 struct MatrixWithProblems {
-    Eigen::MatrixXd values;              // NaN where a problem is recorded
-    std::vector<std::string> problems;   // row-major, rows() * cols() entries
+    Eigen::MatrixXd values;          // NaN where a problem is recorded
+    std::vector<Problem> problems;   // row-major, rows() * cols() entries
     bool valid(Eigen::Index i, Eigen::Index j) const {
-        return problems[static_cast<std::size_t>(i * values.cols() + j)].empty();
+        return !problems[static_cast<std::size_t>(i * values.cols() + j)];
     }
 };
 
