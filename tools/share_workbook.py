@@ -27,15 +27,17 @@ from calc_session import CalcSession, props  # noqa: E402,F401  (props: used by 
 SHARE_URL = "org.coilwright.share:FrozenCopy"
 
 
-def share_document(session, doc, out_ods):
+def share_document(session, doc, out_ods=None):
     """Runs the extension's share command on an open document; returns its report as a dict
     (Copy, Pdf, FrozenCells, FrozenArrays, ErrorCells, FrozenNames, FrozenConditionalFormats,
-    FrozenValidations, ExactValues, Warnings, Message)."""
+    FrozenValidations, ExactValues, Warnings, Message). Without out_ods the command writes
+    NAME-shared.ods beside the document, as the menu entry does."""
     helper = session.smgr.createInstanceWithContext("com.sun.star.frame.DispatchHelper", session.ctx)
     frame = doc.getCurrentController().getFrame()
-    answer = helper.executeDispatch(frame, SHARE_URL, "", 0,
-                                    props(TargetURL=uno.systemPathToFileUrl(str(pathlib.Path(out_ods).resolve())),
-                                          Silent=True))
+    args = {"Silent": True}
+    if out_ods is not None:
+        args["TargetURL"] = uno.systemPathToFileUrl(str(pathlib.Path(out_ods).resolve()))
+    answer = helper.executeDispatch(frame, SHARE_URL, "", 0, props(**args))
     # DispatchHelper hands back the command's DispatchResultEvent; its Result is the report.
     result = getattr(answer, "Result", None)
     report = {p.Name: p.Value for p in result} if result else {}

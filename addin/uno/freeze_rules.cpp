@@ -31,6 +31,7 @@
 #include <algorithm>
 #include <cctype>
 #include <map>
+#include <set>
 
 #include "formula_calls.hpp"
 #include "share_support.hpp"
@@ -61,6 +62,7 @@ struct Use {
     std::vector<CellRangeAddress> ranges;  // the cells the rule applies to (none for a name)
     Sequence<FormulaToken> tokens;  // read at `source` on the values sheet
     bool per_cell = false;
+    bool refused = false;         // cannot be frozen (see uses_own_position)
     rtl::OUString reference;      // what replaces the call; empty when it could not be placed
 };
 
@@ -95,6 +97,7 @@ struct FormatEntry {
 struct FormatRule {
     Reference<css::sheet::XConditionalFormats> formats;
     sal_Int32 id = 0;
+    sal_Int32 sheet = 0;
     Reference<css::beans::XPropertySet> ranges;
     std::vector<FormatEntry> entries;
     std::string where;
@@ -141,11 +144,13 @@ CellRangeAddress bounds(const std::vector<CellRangeAddress>& ranges) {
     return b;
 }
 
-bool mentions_position(const rtl::OUString& call) {
-    // ROW() and COLUMN() without a reference give the position of the cell being evaluated.
-    std::string upper = utf8(call);
-    for (char& c : upper) c = static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
-    return upper.find("ROW(") != std::string::npos || upper.find("COLUMN(") != std::string::npos;
+// ROW() and COLUMN() without a reference give the position of the cell the formula is evaluated
+// in, which a frozen-values cell cannot stand in for.
+bool uses_own_position(const rtl::OUString& call) {
+    std::string upper;
+    for (char c : utf8(call))
+        if (c != ' ') upper += static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+    return upper.find("ROW()") != std::string::npos || upper.find("COLUMN()") != std::string::npos;
 }
 
 template <typename Fn>
@@ -200,17 +205,31 @@ public:
     RuleFreeze run() {
         collect_names();
         for (sal_Int32 s = 0; s < sheets_->getCount(); ++s) {
-            collect_formats(s);
             collect_validations(s);
+            collect_formats(s);
         }
-        if (uses_.empty()) return std::move(result_);
+        if (uses_.empty()) {
+            warn_unresolved();
+            return std::move(result_);
+        }
         Reference<css::sheet::XCalculatable> calc(document_, UNO_QUERY_THROW);
         const bool automatic = calc->isAutomaticCalculationEnabled();
         calc->enableAutomaticCalculation(false);
         create_values_sheet();
-        read_tokens();
-        lay_out();
-        apply();
+        write(0, 0, "Values of Coilwright calls made by named expressions, conditional formats and validity rules");
+        write(0, 1, "Each value was computed with the Coilwright add-in and frozen; the rules refer to these cells, "
+                    "so the copy works without the add-in.");
+        std::size_t from = 0;
+        // A cell shows the formulas of its first conditional format only, so formats that overlap
+        // become readable one round after the format before them was rewritten.
+        for (int round = 0; round < 64 && from < uses_.size(); ++round) {
+            read_tokens(from);
+            lay_out(from);
+            apply();
+            from = uses_.size();
+            for (sal_Int32 s = 0; s < values_index_; ++s) collect_formats(s);
+        }
+        warn_unresolved();
         calc->enableAutomaticCalculation(automatic);
         return std::move(result_);
     }
@@ -325,14 +344,23 @@ private:
             }
             if (!mentions) continue;
             const auto view = representable ? api_view(s, where_ranges, styles) : Reference<css::container::XIndexAccess>();
+            sal_Int32 id = 0;
+            fp->getPropertyValue("ID") >>= id;
+            const auto key = std::make_pair(s, id);
+            if (given_up_.count(key)) continue;
             if (!view.is()) {
-                result_.warnings.push_back(where + ": left as it was (entries of a kind that cannot be rewritten, "
-                                                   "or overlapping another format)");
+                unresolved_[key] = where + (representable ? ": overlaps another conditional format that could not be "
+                                                            "rewritten; left as it was"
+                                                          : ": has entries of a kind that cannot be rewritten "
+                                                            "(colour scale, data bar, icon set, date, text or top-N "
+                                                            "condition); left as it was");
                 continue;
             }
+            unresolved_.erase(key);
             FormatRule rule;
             rule.formats = formats;
-            fp->getPropertyValue("ID") >>= rule.id;
+            rule.id = id;
+            rule.sheet = s;
             rule.ranges.set(ranges, UNO_QUERY_THROW);
             rule.where = where;
             for (sal_Int32 i = 0; i < view->getCount(); ++i) {
@@ -386,13 +414,17 @@ private:
 
     // Each call is written once into the cell of the values sheet at its source position, so
     // Calc reads its references relative to that position; the tokens keep them.
-    void read_tokens() {
-        for (auto& use : uses_) {
+    void read_tokens(std::size_t from) {
+        for (std::size_t u = from; u < uses_.size(); ++u) {
+            Use& use = uses_[u];
             const auto scratch = values_->getCellByPosition(use.source.Column, use.source.Row);
             scratch->setFormula("=" + use.call);
             use.tokens = Reference<css::sheet::XFormulaTokens>(scratch, UNO_QUERY_THROW)->getTokens();
             scratch->setFormula("");
-            use.per_cell = depends_on_position(use.tokens, use.sheet_of_user) || mentions_position(use.call);
+            use.per_cell = depends_on_position(use.tokens, use.sheet_of_user);
+            use.refused = uses_own_position(use.call);
+            if (use.refused)
+                result_.warnings.push_back(use.where + ": a call uses ROW() or COLUMN() of the cell itself; left as it was");
         }
     }
 
@@ -406,35 +438,36 @@ private:
         ++result_.calls;
     }
 
-    void lay_out() {
+    // Uses from `from` on: first one row per distinct call that does not depend on the cell it
+    // serves, then one block per call that does, each value at the address of the cell it
+    // serves, `shift` rows lower. Everything goes below the rows used so far.
+    void lay_out(std::size_t from) {
         std::string sheet_ref = quoted_sheet(values_name_);
         sheet_ref.insert(sheet_ref.begin(), '$');
         sheet_ref += '.';
-        write(0, 0, "Values of Coilwright calls made by named expressions, conditional formats and validity rules");
-        write(0, 1, "Each value was computed with the Coilwright add-in and frozen; the rules refer to these cells, "
-                    "so the copy works without the add-in.");
-        // One row per distinct call that does not depend on the cell it serves.
-        std::map<std::string, sal_Int32> rows;
-        sal_Int32 next = kFirstValueRow;
-        for (auto& use : uses_) {
-            if (use.per_cell) continue;
+        for (std::size_t u = from; u < uses_.size(); ++u) {
+            Use& use = uses_[u];
+            if (use.per_cell || use.refused) continue;
             const std::string key = std::to_string(use.source.Sheet) + "|" + utf8(use.call);
-            auto it = rows.find(key);
-            if (it == rows.end()) {
-                it = rows.emplace(key, next++).first;
+            auto it = single_rows_.find(key);
+            if (it == single_rows_.end()) {
+                it = single_rows_.emplace(key, free_row_++).first;
                 write(0, it->second, use.where);
                 place_call(1, it->second, use, 0);
                 write(2, it->second, without_prefix(utf8(use.call), addin_prefix()));
             }
             use.reference = ustr(sheet_ref + "$B$" + std::to_string(it->second + 1));
         }
-        // Below them, one block per call that does: each value at the address of the cell it
-        // serves, `shift` rows lower.
-        sal_Int32 free_row = next + 1;
-        for (auto& use : uses_) {
-            if (!use.per_cell || use.sheet_of_user) continue;
+        ++free_row_;
+        for (std::size_t u = from; u < uses_.size(); ++u) {
+            Use& use = uses_[u];
+            if (!use.per_cell || use.refused) continue;
+            if (use.sheet_of_user) {
+                result_.warnings.push_back(use.where + ": its call depends on the cell that uses the name; left as it was");
+                continue;
+            }
             const CellRangeAddress box = bounds(use.ranges);
-            const sal_Int32 top = std::max(free_row + 1, box.StartRow);
+            const sal_Int32 top = std::max(free_row_ + 1, box.StartRow);
             const sal_Int32 shift = top - box.StartRow;
             const sal_Int32 height = box.EndRow - box.StartRow + 1;
             if (cell_count(use.ranges) > kMaxCellsPerCall || top + height > max_rows_ ||
@@ -450,13 +483,15 @@ private:
                 for (sal_Int32 row = r.StartRow; row <= r.EndRow; ++row)
                     for (sal_Int32 col = r.StartColumn; col <= r.EndColumn; ++col) place_call(col, row + shift, use, shift);
             use.reference = ustr(sheet_ref + cell_name(use.source.Column, use.source.Row + shift));
-            free_row = top + height + 1;
+            free_row_ = top + height + 1;
         }
-        for (const auto& use : uses_)
-            if (use.per_cell && use.sheet_of_user)
-                result_.warnings.push_back(use.where + ": its call depends on the cell that uses the name; left as it was");
     }
 
+    void warn_unresolved() {
+        for (const auto& [key, text] : unresolved_) result_.warnings.push_back(text);
+    }
+
+    // Rewrites the rules collected since the last call (each rule once).
     void apply() {
         for (auto& rule : names_) {
             if (!rule.formula.ready(uses_)) continue;
@@ -464,7 +499,10 @@ private:
             ++result_.names;
         }
         for (auto& rule : formats_) {
-            if (!ready(rule, uses_)) continue;
+            if (!ready(rule, uses_)) {
+                given_up_.insert({rule.sheet, rule.id});
+                continue;
+            }
             rule.formats->removeByID(rule.id);
             Reference<css::sheet::XSheetConditionalEntries> entries(rule.ranges->getPropertyValue("ConditionalFormat"),
                                                                     UNO_QUERY_THROW);
@@ -489,6 +527,9 @@ private:
             rule.range->setPropertyValue("Validation", Any(rule.validation));
             ++result_.validations;
         }
+        names_.clear();
+        formats_.clear();
+        validations_.clear();
     }
 
     Reference<css::sheet::XSpreadsheetDocument> document_;
@@ -501,6 +542,10 @@ private:
     std::vector<NameRule> names_;
     std::vector<FormatRule> formats_;
     std::vector<ValidityRule> validations_;
+    std::map<std::pair<sal_Int32, sal_Int32>, std::string> unresolved_;  // (sheet, format ID) -> why
+    std::set<std::pair<sal_Int32, sal_Int32>> given_up_;  // formats whose calls could not be placed
+    std::map<std::string, sal_Int32> single_rows_;
+    sal_Int32 free_row_ = kFirstValueRow;
     RuleFreeze result_;
 };
 
