@@ -25,6 +25,7 @@
 #include <com/sun/star/sheet/XSpreadsheets.hpp>
 #include <com/sun/star/table/XCell.hpp>
 #include <com/sun/star/table/XColumnRowRange.hpp>
+#include <com/sun/star/table/XTableColumns.hpp>
 #include <com/sun/star/table/XTableRows.hpp>
 #include <com/sun/star/text/XSimpleText.hpp>
 
@@ -51,6 +52,9 @@ namespace {
 
 constexpr sal_Int64 kMaxCellsPerCall = 100000;  // per-cell copies of one call beyond this are refused
 constexpr sal_Int32 kFirstValueRow = 3;         // rows 1 and 2 explain the sheet
+// A flag of our own, beyond css::sheet::ReferenceFlags, marking a reference written without a
+// sheet (removed before the tokens go into a cell).
+constexpr sal_Int32 kNamedNoSheet = 1 << 20;
 const char* const kValuesSheet = "Frozen values";
 
 // One add-in call inside one formula of a rule.
@@ -171,17 +175,29 @@ void for_each_reference(Sequence<FormulaToken>& tokens, Fn fn) {
     }
 }
 
-// Makes the call's references, read in a cell of the values sheet, name their sheet (the rule's
-// own sheet for those written without one) and count relative rows from `row_shift` rows lower.
-Sequence<FormulaToken> pointed(Sequence<FormulaToken> tokens, sal_Int32 values_sheet, sal_Int32 rule_sheet,
-                               sal_Int32 row_shift) {
+// Makes the call's references, read in a cell of the scratch sheet, name their sheet: the rule's
+// own sheet for those written without one (marked kNamedNoSheet: in a named expression they
+// follow the sheet of the cell that uses the name, see depends_on_position).
+Sequence<FormulaToken> pointed(Sequence<FormulaToken> tokens, sal_Int32 scratch_sheet, sal_Int32 rule_sheet) {
     namespace Flags = css::sheet::ReferenceFlags;
     for_each_reference(tokens, [&](css::sheet::SingleReference& ref) {
-        sal_Int32 sheet = (ref.Flags & Flags::SHEET_RELATIVE) ? values_sheet + ref.RelativeSheet : ref.Sheet;
-        if (!(ref.Flags & Flags::SHEET_3D)) sheet = rule_sheet;
+        sal_Int32 sheet = (ref.Flags & Flags::SHEET_RELATIVE) ? scratch_sheet + ref.RelativeSheet : ref.Sheet;
+        if (!(ref.Flags & Flags::SHEET_3D)) {
+            sheet = rule_sheet;
+            ref.Flags |= kNamedNoSheet;
+        }
         ref.Sheet = sheet;
         ref.RelativeSheet = 0;
         ref.Flags = (ref.Flags & ~Flags::SHEET_RELATIVE) | Flags::SHEET_3D;
+    });
+    return tokens;
+}
+
+// The tokens for a cell `row_shift` rows below the one their relative rows count from.
+Sequence<FormulaToken> shifted(Sequence<FormulaToken> tokens, sal_Int32 row_shift) {
+    namespace Flags = css::sheet::ReferenceFlags;
+    for_each_reference(tokens, [&](css::sheet::SingleReference& ref) {
+        ref.Flags &= ~kNamedNoSheet;
         if (ref.Flags & Flags::ROW_RELATIVE) ref.RelativeRow -= row_shift;
     });
     return tokens;
@@ -192,7 +208,7 @@ bool depends_on_position(Sequence<FormulaToken> tokens, bool sheet_of_user) {
     bool relative = false;
     for_each_reference(tokens, [&](css::sheet::SingleReference& ref) {
         relative = relative || (ref.Flags & (Flags::COLUMN_RELATIVE | Flags::ROW_RELATIVE)) != 0 ||
-                   (sheet_of_user && !(ref.Flags & Flags::SHEET_3D));
+                   (sheet_of_user && (ref.Flags & kNamedNoSheet) != 0);
     });
     return relative;
 }
@@ -409,23 +425,34 @@ private:
         values_ = sheet(values_index_);
         values_name_ = name;
         result_.values_sheet = values_index_;
+        auto columns = Reference<css::table::XColumnRowRange>(values_, UNO_QUERY_THROW)->getColumns();
+        Reference<css::beans::XPropertySet>(columns->getByIndex(0), UNO_QUERY_THROW)->setPropertyValue("Width", Any(sal_Int32(9000)));
+        Reference<css::beans::XPropertySet>(columns->getByIndex(1), UNO_QUERY_THROW)->setPropertyValue("Width", Any(sal_Int32(3500)));
         max_rows_ = Reference<css::table::XColumnRowRange>(values_, UNO_QUERY_THROW)->getRows()->getCount();
     }
 
-    // Each call is written once into the cell of the values sheet at its source position, so
+    // Each call is written once into the cell at its source position on a scratch sheet, so
     // Calc reads its references relative to that position; the tokens keep them.
     void read_tokens(std::size_t from) {
+        Reference<css::container::XNameAccess> names(sheets_, UNO_QUERY_THROW);
+        rtl::OUString name = "Coilwright scratch";
+        for (int n = 2; names->hasByName(name); ++n) name = ustr("Coilwright scratch " + std::to_string(n));
+        const sal_Int32 scratch_index = sheets_->getCount();
+        document_->getSheets()->insertNewByName(name, static_cast<sal_Int16>(scratch_index));
+        const auto scratch_sheet = sheet(scratch_index);
         for (std::size_t u = from; u < uses_.size(); ++u) {
             Use& use = uses_[u];
-            const auto scratch = values_->getCellByPosition(use.source.Column, use.source.Row);
+            const auto scratch = scratch_sheet->getCellByPosition(use.source.Column, use.source.Row);
             scratch->setFormula("=" + use.call);
-            use.tokens = Reference<css::sheet::XFormulaTokens>(scratch, UNO_QUERY_THROW)->getTokens();
+            use.tokens = pointed(Reference<css::sheet::XFormulaTokens>(scratch, UNO_QUERY_THROW)->getTokens(),
+                                 scratch_index, use.source.Sheet);
             scratch->setFormula("");
             use.per_cell = depends_on_position(use.tokens, use.sheet_of_user);
             use.refused = uses_own_position(use.call);
             if (use.refused)
                 result_.warnings.push_back(use.where + ": a call uses ROW() or COLUMN() of the cell itself; left as it was");
         }
+        document_->getSheets()->removeByName(name);  // the last sheet: no other sheet moves
     }
 
     void write(sal_Int32 col, sal_Int32 row, const std::string& text) {
@@ -434,7 +461,7 @@ private:
 
     void place_call(sal_Int32 col, sal_Int32 row, const Use& use, sal_Int32 row_shift) {
         Reference<css::sheet::XFormulaTokens>(values_->getCellByPosition(col, row), UNO_QUERY_THROW)
-            ->setTokens(pointed(use.tokens, values_index_, use.source.Sheet, row_shift));
+            ->setTokens(shifted(use.tokens, row_shift));
         ++result_.calls;
     }
 

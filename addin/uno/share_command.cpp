@@ -24,6 +24,7 @@
 #include <com/sun/star/util/URL.hpp>
 #include <cppuhelper/implbase4.hxx>
 #include <cppuhelper/supportsservice.hxx>
+#include <rtl/uri.hxx>
 
 #include "share_copy.hpp"
 #include "share_support.hpp"
@@ -42,8 +43,18 @@ namespace {
 constexpr char kProtocol[] = "org.coilwright.share:";
 constexpr char kImplementation[] = "org.coilwright.ShareCommand";
 
+// "file:///a/my%20design-shared.ods" -> "/a/my design-shared.ods", for people to read.
+std::string readable(const OUString& url) {
+    OUString path = rtl::Uri::decode(url, rtl_UriDecodeWithCharset, RTL_TEXTENCODING_UTF8);
+    if (path.startsWith("file://")) path = path.copy(7);
+    return utf8(path);
+}
+
 std::string summary(const ShareOutcome& o) {
-    std::string text = "Wrote " + utf8(o.copy_url) + " and its PDF.\n\nFrozen: " + std::to_string(o.cells) + " cells (" +
+    const std::string ods = readable(o.copy_url), pdf = readable(o.pdf_url);
+    const std::size_t slash = ods.rfind('/');
+    std::string text = "Wrote " + ods.substr(slash + 1) + " and " + pdf.substr(pdf.rfind('/') + 1) + " in " +
+                       ods.substr(0, slash) + ".\n\nFrozen: " + std::to_string(o.cells) + " cells (" +
                        std::to_string(o.arrays) + " array formulas, " + std::to_string(o.errors) + " error cells), " +
                        std::to_string(o.names) + " named expressions, " + std::to_string(o.conditional_formats) +
                        " conditional formats, " + std::to_string(o.validations) + " validity rules.";

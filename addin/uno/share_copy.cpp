@@ -6,6 +6,7 @@
 #include <com/sun/star/document/XDocumentPropertiesSupplier.hpp>
 #include <com/sun/star/frame/Desktop.hpp>
 #include <com/sun/star/frame/XStorable.hpp>
+#include <com/sun/star/io/IOException.hpp>
 #include <com/sun/star/lang/IllegalArgumentException.hpp>
 #include <com/sun/star/sheet/XCalculatable.hpp>
 #include <com/sun/star/sheet/XSpreadsheetDocument.hpp>
@@ -91,7 +92,12 @@ ShareOutcome write_frozen_copy(const Reference<css::uno::XComponentContext>& con
     outcome.pdf_url = pdf_beside(copy_url);
 
     // The copy starts as the document exactly as it is in memory, numbers included.
-    Reference<css::frame::XStorable>(document, UNO_QUERY_THROW)->storeToURL(copy_url, filter("calc8"));
+    try {
+        Reference<css::frame::XStorable>(document, UNO_QUERY_THROW)->storeToURL(copy_url, filter("calc8"));
+    } catch (const css::io::IOException&) {
+        throw css::io::IOException("LibreOffice could not write " + copy_url +
+                                   ": is that file open, or the folder read-only?");
+    }
     write_numbers_exactly(context, copy_url, collect_numbers(source));
 
     Sequence<css::beans::PropertyValue> load(3);
