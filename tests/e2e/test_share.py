@@ -332,6 +332,29 @@ class FrozenCopy(unittest.TestCase):
         self.assertTrue((copy.parent / "my design-shared.pdf").exists())
         self.assertEqual(uno.fileUrlToSystemPath(report["Copy"]), str(copy.parent / "my design-shared.ods"))
 
+    def test_what_cannot_be_frozen_is_reported_and_left_live(self):
+        doc = self.session.new_document()  # never saved: the command needs a target
+        self.addCleanup(doc.close, True)
+        sheet = doc.Sheets.getByIndex(0)
+        sheet.getCellRangeByName("A1").setValue(0.01)
+        sheet.getCellRangeByName("B1").setFormula("=LOOP_BZ(0.1;10;2;A1)")
+        # A name with a relative reference follows the cell that uses it; ROW() in a rule names the
+        # cell the rule is evaluated in: no frozen value can stand in for either.
+        doc.NamedRanges.addNewByName("FOLLOWS", "LOOP_BZ(0.1;10;2;A1)", CellAddress(0, 1, 0), 0)
+        target = sheet.getCellRangeByName("C1:C3")
+        entries = target.ConditionalFormat
+        entries.addNew(props(Operator=uno.Enum("com.sun.star.sheet.ConditionOperator", "FORMULA"),
+                             Formula1="LOOP_BZ(0.1;10;2;ROW()/100)>0", StyleName="Accent",
+                             SourcePosition=CellAddress(0, 2, 0)))
+        target.ConditionalFormat = entries
+        with self.assertRaisesRegex(RuntimeError, "Save the workbook first"):
+            share_workbook.share_document(self.session, doc)
+        report = share_workbook.share_document(self.session, doc, pathlib.Path(self.tmp.name) / "limits" / "a.ods")
+        warnings = "\n".join(report["Warnings"])
+        self.assertIn("named expression FOLLOWS: its call depends on the cell that uses the name", warnings)
+        self.assertIn("ROW() or COLUMN() of the cell itself", warnings)
+        self.assertEqual((report["FrozenCells"], report["FrozenNames"], report["FrozenConditionalFormats"]), (1, 0, 0))
+
     def test_the_copy_never_replaces_the_workbook(self):
         doc = self.session.open_document(self.live_path)
         self.addCleanup(doc.close, True)
