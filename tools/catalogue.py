@@ -5,7 +5,8 @@ idl/addin.toml (the add-in) and idl/functions/*.toml (the functions, one file pe
 One catalogue, several views, so the names, arguments and help cannot drift apart:
   idl            the UNO interface the add-in implements
   specs          C++ argument specs for the UNO-free core
-  bindings       the list of C++ binding functions, one per family file
+  args           C++ function tags with named argument structs (function_args.hpp)
+  bindings       the compile-time binding table: one implement<fn::NAME>() per function
   methods        the add-in's method glue
   xcu            CalcAddIns configuration: display names, descriptions, argument help
   readme-table   the README's function reference (check-readme / update-readme keep it in step)
@@ -23,8 +24,18 @@ IDL_KEYWORDS = {
     "property", "published", "raises", "readonly", "removable", "sequence", "service",
     "short", "singleton", "string", "struct", "transient", "type", "typedef", "unsigned", "void",
 }
+CXX_KEYWORDS = {
+    "alignas", "alignof", "and", "asm", "auto", "bitand", "bitor", "bool", "break", "case", "catch", "char",
+    "class", "compl", "concept", "const", "consteval", "constexpr", "constinit", "continue", "decltype", "default",
+    "delete", "do", "double", "else", "enum", "explicit", "export", "extern", "false", "float", "for", "friend",
+    "goto", "if", "inline", "int", "long", "mutable", "namespace", "new", "noexcept", "not", "nullptr", "operator",
+    "or", "private", "protected", "public", "register", "requires", "return", "short", "signed", "sizeof",
+    "static", "struct", "switch", "template", "this", "throw", "true", "try", "typedef", "typeid", "typename",
+    "union", "unsigned", "using", "virtual", "void", "volatile", "while", "xor", "from",
+}
 KINDS = {"number", "gauge", "choice", "table"}
 CHOICE_KEYS = ("choices", "values", "aliases", "accept_numbers")
+CHOICE_SET_KEYS = CHOICE_KEYS + ("enum", "enumerators", "header")
 README_BEGIN = "<!-- function-table:begin (generated from idl/functions/*.toml; do not edit) -->"
 README_END = "<!-- function-table:end -->"
 
@@ -34,19 +45,22 @@ def load(idl_dir):
     with open(idl_dir / "addin.toml", "rb") as f:
         data = tomllib.load(f)
     data["function"] = []
-    data["bindings"] = []
+    data.setdefault("choices", {})
+    for set_name, choice_set in data["choices"].items():
+        for key in choice_set:
+            if key not in CHOICE_SET_KEYS:
+                sys.exit(f"catalogue: choice set {set_name}: unknown key {key}")
+        if ("enum" in choice_set) != ("enumerators" in choice_set) or ("enum" in choice_set) != ("header" in choice_set):
+            sys.exit(f"catalogue: choice set {set_name}: enum, enumerators and header go together")
+        if "enumerators" in choice_set and len(choice_set["enumerators"]) != len(choice_set["choices"]):
+            sys.exit(f"catalogue: choice set {set_name}: one enumerator per choice")
     for path in sorted((idl_dir / "functions").glob("*.toml")):
         with open(path, "rb") as f:
             family = tomllib.load(f)
-        binding = family.get("binding")
-        if not binding or not binding.isidentifier():
-            sys.exit(f"catalogue: {path.name}: missing binding")
-        if binding in data["bindings"]:
-            sys.exit(f"catalogue: {path.name}: binding {binding} used twice")
-        data["bindings"].append(binding)
-        for fn in family.get("function", []):
-            fn["binding"] = binding
-            data["function"].append(fn)
+        for key in family:
+            if key != "function":
+                sys.exit(f"catalogue: {path.name}: unknown key {key} (a family file holds [[function]] tables)")
+        data["function"].extend(family.get("function", []))
     names = set()
     for fn in data["function"]:
         if fn["name"] in names:
@@ -58,13 +72,14 @@ def load(idl_dir):
             kind = arg.setdefault("kind", "number")
             if kind not in KINDS:
                 sys.exit(f"catalogue: {fn['name']}.{arg['name']}: unknown kind {kind}")
-            if arg["name"] in IDL_KEYWORDS or not arg["name"].isidentifier():
+            if arg["name"] in IDL_KEYWORDS or arg["name"] in CXX_KEYWORDS or not arg["name"].isidentifier():
                 sys.exit(f"catalogue: {fn['name']}: bad argument name {arg['name']}")
             if "_" in arg["name"]:  # unoidl-write rejects it ("illegal identifier")
                 sys.exit(f"catalogue: {fn['name']}: argument {arg['name']}: UNO IDL allows no underscore here; use camelCase")
             if arg["name"] in arg_names:
                 sys.exit(f"catalogue: {fn['name']}: duplicate argument {arg['name']}")
             arg_names.add(arg["name"])
+            check_vocabulary(fn["name"], arg, data.get("vocabulary", {}))
             if "default" in arg:
                 seen_optional = True
             elif seen_optional:
@@ -72,6 +87,7 @@ def load(idl_dir):
             for key in ("unit", "help"):
                 if not arg.get(key):
                     sys.exit(f"catalogue: {fn['name']}.{arg['name']}: missing {key}")
+            resolve_choice_set(fn["name"], arg, data["choices"])
             check_choice(fn["name"], arg)
         for key in ("group", "returns", "summary", "accuracy"):
             if not fn.get(key):
@@ -82,6 +98,31 @@ def load(idl_dir):
     return data
 
 
+def check_vocabulary(fn_name, arg, vocabulary):
+    """An argument is named from the vocabulary (idl/addin.toml), with a trailing 1 or 2 for
+    two objects of one call, and has the vocabulary's unit."""
+    base = arg["name"][:-1] if arg["name"][-1:] in ("1", "2") and arg["name"][:-1] in vocabulary else arg["name"]
+    if base not in vocabulary:
+        sys.exit(f"catalogue: {fn_name}.{arg['name']}: not in the argument vocabulary of idl/addin.toml "
+                 "(use its name for the quantity, or add the new quantity there)")
+    if arg.get("unit") != vocabulary[base]["unit"]:
+        sys.exit(f"catalogue: {fn_name}.{arg['name']}: unit {arg.get('unit')} differs from the vocabulary's "
+                 f"{vocabulary[base]['unit']}")
+
+
+def resolve_choice_set(fn_name, arg, choice_sets):
+    """choices = "<set>" names a set of idl/addin.toml: its keys are copied into the argument."""
+    if arg["kind"] != "choice" or not isinstance(arg.get("choices"), str):
+        return
+    name = arg["choices"]
+    if name not in choice_sets:
+        sys.exit(f"catalogue: {fn_name}.{arg['name']}: no choice set {name}")
+    if any(key in arg for key in CHOICE_KEYS if key != "choices"):
+        sys.exit(f"catalogue: {fn_name}.{arg['name']}: a choice set is used whole (no values, aliases here)")
+    arg.update(choice_sets[name])
+    arg["choice_set"] = name
+
+
 def check_choice(fn_name, arg):
     """A "choice" argument: text from a fixed list (case-insensitive), converted to a number
     before broadcasting. choices = primary texts; values = their numbers (default 0, 1, ...);
@@ -89,7 +130,7 @@ def check_choice(fn_name, arg):
     default = one of the texts. Fills arg["choice_table"]: [(lower text, value, primary)]."""
     where = f"catalogue: {fn_name}.{arg['name']}"
     if arg["kind"] != "choice":
-        for key in CHOICE_KEYS:
+        for key in CHOICE_SET_KEYS:
             if key in arg:
                 sys.exit(f"{where}: {key} is only for kind = \"choice\"")
         return
@@ -181,13 +222,56 @@ def gen_specs(data):
     return "\n".join(out) + "\n"
 
 
+def cxx_arg_type(arg):
+    return arg["enum"] if arg["kind"] == "choice" and "enum" in arg else "double"
+
+
+def gen_args(data):
+    """One tag per function (fn::NAME): its catalogue index and name, its number of table
+    arguments, and Args, the struct of its other arguments by name, typed (a choice set with an
+    enum arrives as that enum), built from the numbers the call layer broadcasts."""
+    out = ["// Generated from idl/*.toml by tools/catalogue.py: do not edit.",
+           "// The function tags and argument structs the bindings (addin/functions/*.cpp) use.",
+           "#pragma once", "", "#include <cstddef>", ""]
+    headers = sorted({s["header"] for s in data["choices"].values() if "header" in s})
+    out += [f'#include "{h}"' for h in headers]
+    out += ["", "namespace coilwright::sheet::fn {", ""]
+    for set_name, choice_set in sorted(data["choices"].items()):
+        if "enum" not in choice_set:
+            continue
+        values = choice_set.get("values", list(range(len(choice_set["choices"]))))
+        for enumerator, value in zip(choice_set["enumerators"], values):
+            out.append(f"static_assert(static_cast<int>({choice_set['enum']}::{enumerator}) == {int(value)}, "
+                       f"\"choice set {set_name}: {enumerator} must be {int(value)}\");")
+    out.append("")
+    for index, fn in enumerate(data["function"]):
+        numbers = [a for a in fn["args"] if a["kind"] != "table"]
+        tables = len(fn["args"]) - len(numbers)
+        members = [f"        {cxx_arg_type(a)} {a['name']};" for a in numbers]
+        conversions = [f"static_cast<{a['enum']}>(a[{k}])" if cxx_arg_type(a) != "double" else f"a[{k}]"
+                       for k, a in enumerate(numbers)]
+        from_param = "a" if numbers else ""
+        out += [f"struct {fn['name']} {{",
+                f"    static constexpr std::size_t index = {index};",
+                f"    static constexpr const char* name = {cxx_string(fn['name'])};",
+                f"    static constexpr std::size_t table_count = {tables};",
+                "    struct Args {"] + members + [
+                f"        static Args from([[maybe_unused]] const double* {from_param or 'a'}) {{ return {{{', '.join(conversions)}}}; }}",
+                "    };",
+                "};", ""]
+    out.append("}  // namespace coilwright::sheet::fn")
+    return "\n".join(out) + "\n"
+
+
 def gen_bindings(data):
-    """Declarations and list of the per-family binding functions (addin/functions/*.cpp)."""
-    out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
-           "// Included by addin/core/registry.cpp.", ""]
-    out += [f"std::vector<Implementation> {b}();" for b in data["bindings"]]
-    out += ["", "using Binding = std::vector<Implementation> (*)();",
-            "const Binding kBindings[] = {" + ", ".join(data["bindings"]) + "};"]
+    """The binding table in catalogue order: every function's implement<fn::NAME>(), which its
+    family file (addin/functions/*.cpp) defines. A function without one fails to link; one for a
+    name the catalogue lacks fails to compile."""
+    out = ["// Generated from idl/*.toml by tools/catalogue.py: do not edit.",
+           "// Included by addin/core/registry.cpp.", "",
+           "const ImplementFn kImplementers[] = {"]
+    out += [f"    implement<fn::{fn['name']}>," for fn in data["function"]]
+    out += ["};"]
     return "\n".join(out) + "\n"
 
 
@@ -280,7 +364,7 @@ def readme_parts(readme_text):
 
 def main():
     ap = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
-    ap.add_argument("what", choices=["idl", "specs", "bindings", "methods", "xcu", "readme-table", "check-readme",
+    ap.add_argument("what", choices=["idl", "specs", "args", "bindings", "methods", "xcu", "readme-table", "check-readme",
                                      "update-readme"])
     ap.add_argument("--idl-dir", default=str(pathlib.Path(__file__).resolve().parent.parent / "idl"))
     ap.add_argument("--out", help="output file (default: stdout); README path for *-readme")
@@ -302,7 +386,7 @@ def main():
         print("README function table matches the catalogue")
         return 0
 
-    text = {"idl": gen_idl, "specs": gen_specs, "bindings": gen_bindings, "methods": gen_methods, "xcu": gen_xcu,
+    text = {"idl": gen_idl, "specs": gen_specs, "args": gen_args, "bindings": gen_bindings, "methods": gen_methods, "xcu": gen_xcu,
             "readme-table": gen_readme_table}[opts.what](data)
     if opts.out:
         out = pathlib.Path(opts.out)

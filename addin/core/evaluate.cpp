@@ -257,7 +257,7 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
         text.text = std::move(prepared.text);
         return text;
     }
-    if (prepared.cost * static_cast<double>(count) > kMaxWorkPerCall)
+    if (prepared.cost * static_cast<double>(count) > work::kMaxWorkPerCall)
         return CallResult::failure(CellError::IllegalArgument,
                                    "this call asks for too much work for one formula; split the range");
 
@@ -315,7 +315,7 @@ bool evaluate_plain(std::size_t function_index, std::span<const double> numbers,
     const FunctionSpec& spec = specs[function_index];
     const Implementation& impl = implementations()[function_index];
     if (!impl.plain || spec.text_result || numbers.size() != spec.arg_count || spec.arg_count > kMaxArgs ||
-        impl.plain_cost > kMaxWorkPerCall)
+        impl.plain_cost > work::kMaxWorkPerCall)
         return false;
     double element[kMaxArgs];
     for (std::size_t k = 0; k < spec.arg_count; ++k) {

@@ -1,4 +1,10 @@
 // What each catalogue function computes: the bridge from spreadsheet arguments to the engine.
+//
+// Every function of the catalogue has a tag fn::NAME (generated: function_args.hpp) with its
+// index, its name and Args, the struct of its arguments by name. Its family's file in
+// addin/functions/ defines implement<fn::NAME>(); the generated binding table lists them in
+// catalogue order, so a function without an implementation does not link and an
+// implementation of a name the catalogue lacks does not compile.
 #pragma once
 
 #include <cstddef>
@@ -8,6 +14,8 @@
 #include <vector>
 
 #include "cells.hpp"
+#include "function_args.hpp"
+#include "work_costs.hpp"
 
 namespace coilwright::sheet {
 
@@ -28,10 +36,10 @@ using ShapedFn = std::function<CallResult(const double* numbers)>;
 
 struct Prepared {
     ElementFn fn;
-    double cost = 1.0;  // work per element in units of one loop-field evaluation
-    BatchFn batch;      // when set, array formulas go through it first
-    ShapedFn shaped;    // when set, used instead of fn: no broadcasting, one result of its own shape
-    std::string text;   // the result of a function that returns text (no ElementFn then)
+    double cost = work::kLoopField;  // work per element in loop-field evaluations
+    BatchFn batch;                   // when set, array formulas go through it first
+    ShapedFn shaped;                 // when set, used instead of fn: no broadcasting, one result of its own shape
+    std::string text;                // the result of a function that returns text (no ElementFn then)
 };
 
 // Builds the element function once per call from the table arguments (may throw).
@@ -46,18 +54,43 @@ struct Implementation {
     double plain_cost = 0.0;
 };
 
-// A function whose arguments are all numbers; `batch` (optional) computes arrays faster.
-Implementation numeric(const char* name, ElementFn fn, double cost = 1.0, BatchFn batch = {});
+// The implementation of catalogue function Fn; defined once per function in addin/functions/.
+template <class Fn>
+Implementation implement();
+using ImplementFn = Implementation (*)();
+
+// A function whose arguments are all numbers: f(const Fn::Args&) gives one element; `batch`
+// (optional) computes arrays faster.
+template <class Fn, class F>
+Implementation numeric(F f, double cost = work::kLoopField, BatchFn batch = {}) {
+    static_assert(Fn::table_count == 0, "numeric() is for functions without table arguments");
+    ElementFn fn = [f](const double* a) { return f(Fn::Args::from(a)); };
+    ElementFn plain = fn;
+    return {Fn::name,
+            [fn = std::move(fn), cost, batch = std::move(batch)](std::span<const Arg* const>) {
+                return Prepared{fn, cost, batch, {}, {}};
+            },
+            std::move(plain), cost};
+}
 
 // A function returning one text value from its table arguments (returns = "text").
-using TextFn = std::function<std::string(std::span<const Arg* const> tables)>;
-Implementation text_result(const char* name, TextFn fn);
+template <class Fn>
+Implementation text_result(std::function<std::string(std::span<const Arg* const> tables)> f) {
+    return {Fn::name, [f = std::move(f)](std::span<const Arg* const> tables) {
+                Prepared p;
+                p.cost = 0.0;
+                p.text = f(tables);
+                return p;
+            }};
+}
 
-// Every implementation, ordered like function_specs(); an entry whose prepare is empty has
-// no implementation (a unit test makes sure there is none).
+// A function that prepares its own call (a result of its own shape, a table read once).
+template <class Fn>
+Implementation prepared(PrepareFn prepare) {
+    return {Fn::name, std::move(prepare)};
+}
+
+// Every implementation, ordered like function_specs() (the generated binding table).
 const std::vector<Implementation>& implementations();
-
-// Everything the functions/*.cpp files contribute, in no particular order.
-std::vector<Implementation> contributed_implementations();
 
 }  // namespace coilwright::sheet

@@ -17,26 +17,34 @@ CallResult table_result(const CoilTable& table) {
     return r;
 }
 
-// A function of single numbers whose result is a coil table.
-template <class F>
-Implementation table_maker(const char* name, F make) {
-    return {name, [make](std::span<const Arg* const>) {
-                Prepared p;
-                p.cost = 500.0;  // a spacing search
-                p.shaped = [make](const double* a) { return table_result(make(a)); };
-                return p;
-            }};
+// A function of single numbers whose result is a coil table: make(const Fn::Args&).
+template <class Fn, class F>
+Implementation table_maker(F make) {
+    return prepared<Fn>([make](std::span<const Arg* const>) {
+        Prepared p;
+        p.cost = work::kPairSpacingSearch;
+        p.shaped = [make](const double* a) { return table_result(make(Fn::Args::from(a))); };
+        return p;
+    });
 }
 
 }  // namespace
 
-std::vector<Implementation> arrangement_functions() {
-    return {
-        table_maker("PAIR_COILS", [](const double* a) { return flat_pair_table({a[0], a[1], a[2]}, a[3], a[4]); }),
-        table_maker("GRADPAIR_COILS",
-                    [](const double* a) { return gradient_pair_table({a[0], a[1], a[2]}, a[3], a[4]); }),
-        table_maker("MAXWELL_COILS", [](const double* a) { return maxwell_table(a[0], a[1], a[2]); }),
-    };
+template <> Implementation implement<fn::PAIR_COILS>() {
+    return table_maker<fn::PAIR_COILS>([](const fn::PAIR_COILS::Args& a) {
+        return flat_pair_table({a.innerRadius, a.outerRadius, a.length}, a.turns, a.current);
+    });
+}
+
+template <> Implementation implement<fn::GRADPAIR_COILS>() {
+    return table_maker<fn::GRADPAIR_COILS>([](const fn::GRADPAIR_COILS::Args& a) {
+        return gradient_pair_table({a.innerRadius, a.outerRadius, a.length}, a.turns, a.current);
+    });
+}
+
+template <> Implementation implement<fn::MAXWELL_COILS>() {
+    return table_maker<fn::MAXWELL_COILS>(
+        [](const fn::MAXWELL_COILS::Args& a) { return maxwell_table(a.radius, a.turns, a.current); });
 }
 
 }  // namespace coilwright::sheet

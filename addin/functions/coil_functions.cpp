@@ -1,22 +1,30 @@
-// COIL_* : thick winding of rectangular cross-section, uniform current density.
+// COIL_BZ, COIL_BR, COIL_B: thick winding of rectangular cross-section, uniform current density.
 #include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {
 
-std::vector<Implementation> coil_functions() {
-    // Argument order as in idl/functions/30_coil.toml: inner radius, outer radius, length,
-    // turns, current, z, r. Cost in loop-field evaluations per element: typically 20 to 60,
-    // up to a few hundred next to the winding's corners (see README).
-    constexpr double kCost = 100.0;
-    auto field = [](const double* a, Components want) {
-        return thick_coil_field({a[0], a[1], a[2], a[3], a[4]}, a[5], a[6], want);
-    };
-    return {
-        numeric("COIL_BZ", [field](const double* a) { return field(a, Components::Axial).bz; }, kCost),
-        numeric("COIL_BR", [field](const double* a) { return field(a, Components::Radial).br; }, kCost),
-        numeric("COIL_B", [field](const double* a) { return field(a, Components::Both).magnitude(); }, kCost),
-    };
+namespace {
+
+template <class Fn, class Pick>
+Implementation coil_component(Components want, Pick pick) {
+    return numeric<Fn>(
+        [want, pick](const typename Fn::Args& a) {
+            return pick(thick_coil_field({a.innerRadius, a.outerRadius, a.length, a.turns, a.current}, a.z, a.r, want));
+        },
+        work::kThickField);
+}
+
+}  // namespace
+
+template <> Implementation implement<fn::COIL_BZ>() {
+    return coil_component<fn::COIL_BZ>(Components::Axial, [](const FieldRZ& f) { return f.bz; });
+}
+template <> Implementation implement<fn::COIL_BR>() {
+    return coil_component<fn::COIL_BR>(Components::Radial, [](const FieldRZ& f) { return f.br; });
+}
+template <> Implementation implement<fn::COIL_B>() {
+    return coil_component<fn::COIL_B>(Components::Both, [](const FieldRZ& f) { return f.magnitude(); });
 }
 
 }  // namespace coilwright::sheet

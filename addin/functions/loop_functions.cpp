@@ -3,7 +3,6 @@
 #include <cmath>
 #include <cstring>
 
-#include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
@@ -11,7 +10,6 @@ namespace coilwright::sheet {
 
 namespace {
 
-// Argument order as in idl/functions/10_loop.toml: radius, turns, current, z, r.
 enum class Component { Bz, Br, Magnitude };
 
 double component(Component which, double bz, double br) {
@@ -23,20 +21,14 @@ double component(Component which, double bz, double br) {
     return std::hypot(bz, br);  // as FieldRZ::magnitude
 }
 
-ElementFn element(Component which) {
-    return [which](const double* a) {
-        const FieldRZ f = loop_field({a[0], a[1], a[2]}, a[3], a[4]);
-        return component(which, f.bz, f.br);
-    };
-}
-
 bool same_throughout(const double* column, std::size_t n) {
     return std::all_of(column, column + n, [&](double v) { return std::memcmp(&v, column, sizeof v) == 0; });
 }
 
 // An array of points around one loop (radius, turns and current the same throughout) goes
 // through loop_field_batch, which gives loop_field's values bit for bit and NaN where it
-// throws; the call layer then asks the element function for those errors.
+// throws; the call layer then asks the element function for those errors. Columns are the
+// arguments in catalogue order: radius, turns, current, z, r.
 BatchFn batch(Component which) {
     return [which](const double* const* columns, std::size_t n, double* out) {
         if (n == 0) return true;
@@ -59,14 +51,20 @@ BatchFn batch(Component which) {
     };
 }
 
+template <class Fn>
+Implementation loop_component(Component which) {
+    return numeric<Fn>(
+        [which](const typename Fn::Args& a) {
+            const FieldRZ f = loop_field({a.radius, a.turns, a.current}, a.z, a.r);
+            return component(which, f.bz, f.br);
+        },
+        work::kLoopField, batch(which));
+}
+
 }  // namespace
 
-std::vector<Implementation> loop_functions() {
-    return {
-        numeric("LOOP_BZ", element(Component::Bz), 1.0, batch(Component::Bz)),
-        numeric("LOOP_BR", element(Component::Br), 1.0, batch(Component::Br)),
-        numeric("LOOP_B", element(Component::Magnitude), 1.0, batch(Component::Magnitude)),
-    };
-}
+template <> Implementation implement<fn::LOOP_BZ>() { return loop_component<fn::LOOP_BZ>(Component::Bz); }
+template <> Implementation implement<fn::LOOP_BR>() { return loop_component<fn::LOOP_BR>(Component::Br); }
+template <> Implementation implement<fn::LOOP_B>() { return loop_component<fn::LOOP_B>(Component::Magnitude); }
 
 }  // namespace coilwright::sheet

@@ -4,16 +4,39 @@
 
 namespace coilwright::sheet {
 
-std::vector<Implementation> pair_functions() {
-    // Arguments as in idl/functions/45_pair.toml; a coil shape is (inner, outer, length).
-    return {
-        numeric("HELMHOLTZ_B0", [](const double* a) { return helmholtz_centre_field(a[0], a[1], a[2]); }),
-        numeric("PAIR_SPACING", [](const double* a) { return flat_pair_spacing({a[0], a[1], a[2]}); }, 500.0),
-        numeric("PAIR_B0", [](const double* a) { return pair_centre_field({a[0], a[1], a[2]}, a[3], a[4], a[5]); }),
-        numeric("GRADPAIR_SPACING", [](const double* a) { return gradient_pair_spacing({a[0], a[1], a[2]}); }, 500.0),
-        numeric("GRADPAIR_GRADIENT",
-                [](const double* a) { return gradient_pair_gradient({a[0], a[1], a[2]}, a[3], a[4], a[5]); }),
-    };
+namespace {
+
+template <class Args>
+CoilSection section(const Args& a) {
+    return {a.innerRadius, a.outerRadius, a.length};
+}
+
+}  // namespace
+
+template <> Implementation implement<fn::HELMHOLTZ_B0>() {
+    return numeric<fn::HELMHOLTZ_B0>(
+        [](const fn::HELMHOLTZ_B0::Args& a) { return helmholtz_centre_field(a.radius, a.turns, a.current); });
+}
+
+template <> Implementation implement<fn::PAIR_SPACING>() {
+    return numeric<fn::PAIR_SPACING>([](const fn::PAIR_SPACING::Args& a) { return flat_pair_spacing(section(a)); },
+                                     work::kPairSpacingSearch);
+}
+
+template <> Implementation implement<fn::PAIR_B0>() {
+    return numeric<fn::PAIR_B0>(
+        [](const fn::PAIR_B0::Args& a) { return pair_centre_field(section(a), a.turns, a.current, a.spacing); });
+}
+
+template <> Implementation implement<fn::GRADPAIR_SPACING>() {
+    return numeric<fn::GRADPAIR_SPACING>(
+        [](const fn::GRADPAIR_SPACING::Args& a) { return gradient_pair_spacing(section(a)); }, work::kPairSpacingSearch);
+}
+
+template <> Implementation implement<fn::GRADPAIR_GRADIENT>() {
+    return numeric<fn::GRADPAIR_GRADIENT>([](const fn::GRADPAIR_GRADIENT::Args& a) {
+        return gradient_pair_gradient(section(a), a.turns, a.current, a.spacing);
+    });
 }
 
 }  // namespace coilwright::sheet

@@ -1,26 +1,48 @@
 // RECT_* and RECTPAIR_*: rectangular loops and pairs of them.
-#include "coilwright/field.hpp"
 #include "coilwright/design.hpp"
+#include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {
 
-std::vector<Implementation> rect_functions() {
-    // Argument order as in idl/functions/50_rect.toml:
-    // loop: width, height, turns, current, x, y, z; pair: width, height, spacing, turns, current, x, y, z.
-    auto loop = [](const double* a) { return rect_field({a[0], a[1], a[2], a[3]}, {a[4], a[5], a[6]}); };
-    auto pair = [](const double* a) { return rect_pair_field({a[0], a[1], a[3], a[4]}, a[2], {a[5], a[6], a[7]}); };
-    return {
-        numeric("RECT_BX", [loop](const double* a) { return loop(a).x(); }),
-        numeric("RECT_BY", [loop](const double* a) { return loop(a).y(); }),
-        numeric("RECT_BZ", [loop](const double* a) { return loop(a).z(); }),
-        numeric("RECT_B", [loop](const double* a) { return loop(a).stableNorm(); }),
-        numeric("RECTPAIR_BX", [pair](const double* a) { return pair(a).x(); }, 2.0),
-        numeric("RECTPAIR_BY", [pair](const double* a) { return pair(a).y(); }, 2.0),
-        numeric("RECTPAIR_BZ", [pair](const double* a) { return pair(a).z(); }, 2.0),
-        numeric("RECTPAIR_B", [pair](const double* a) { return pair(a).stableNorm(); }, 2.0),
-        numeric("RECTPAIR_SPACING", [](const double* a) { return rect_pair_spacing(a[0], a[1]); }, 20.0),
-    };
+namespace {
+
+template <class Fn, class Pick>
+Implementation rect_component(Pick pick) {
+    return numeric<Fn>([pick](const typename Fn::Args& a) {
+        return pick(rect_field({a.width, a.height, a.turns, a.current}, {a.x, a.y, a.z}));
+    });
+}
+
+template <class Fn, class Pick>
+Implementation rect_pair_component(Pick pick) {
+    return numeric<Fn>(
+        [pick](const typename Fn::Args& a) {
+            return pick(rect_pair_field({a.width, a.height, a.turns, a.current}, a.spacing, {a.x, a.y, a.z}));
+        },
+        work::kRectPairField);
+}
+
+const auto kX = [](const Eigen::Vector3d& b) { return b.x(); };
+const auto kY = [](const Eigen::Vector3d& b) { return b.y(); };
+const auto kZ = [](const Eigen::Vector3d& b) { return b.z(); };
+const auto kNorm = [](const Eigen::Vector3d& b) { return b.stableNorm(); };
+
+}  // namespace
+
+template <> Implementation implement<fn::RECT_BX>() { return rect_component<fn::RECT_BX>(kX); }
+template <> Implementation implement<fn::RECT_BY>() { return rect_component<fn::RECT_BY>(kY); }
+template <> Implementation implement<fn::RECT_BZ>() { return rect_component<fn::RECT_BZ>(kZ); }
+template <> Implementation implement<fn::RECT_B>() { return rect_component<fn::RECT_B>(kNorm); }
+template <> Implementation implement<fn::RECTPAIR_BX>() { return rect_pair_component<fn::RECTPAIR_BX>(kX); }
+template <> Implementation implement<fn::RECTPAIR_BY>() { return rect_pair_component<fn::RECTPAIR_BY>(kY); }
+template <> Implementation implement<fn::RECTPAIR_BZ>() { return rect_pair_component<fn::RECTPAIR_BZ>(kZ); }
+template <> Implementation implement<fn::RECTPAIR_B>() { return rect_pair_component<fn::RECTPAIR_B>(kNorm); }
+
+template <> Implementation implement<fn::RECTPAIR_SPACING>() {
+    return numeric<fn::RECTPAIR_SPACING>(
+        [](const fn::RECTPAIR_SPACING::Args& a) { return rect_pair_spacing(a.width, a.height); },
+        work::kRectPairSpacingSearch);
 }
 
 }  // namespace coilwright::sheet

@@ -4,18 +4,27 @@
 
 namespace coilwright::sheet {
 
-std::vector<Implementation> solenoid_functions() {
-    // Argument order as in idl/functions/20_solenoid.toml: radius, length, turns, current, z, r.
-    // Cost in loop-field evaluations per element (measured: about 3 to 8; see README).
-    constexpr double kCost = 10.0;
-    auto field = [](const double* a, Components want) {
-        return solenoid_field({a[0], a[1], a[2], a[3]}, a[4], a[5], want);
-    };
-    return {
-        numeric("SOLENOID_BZ", [field](const double* a) { return field(a, Components::Axial).bz; }, kCost),
-        numeric("SOLENOID_BR", [field](const double* a) { return field(a, Components::Radial).br; }, kCost),
-        numeric("SOLENOID_B", [field](const double* a) { return field(a, Components::Both).magnitude(); }, kCost),
-    };
+namespace {
+
+template <class Fn, class Pick>
+Implementation solenoid_component(Components want, Pick pick) {
+    return numeric<Fn>(
+        [want, pick](const typename Fn::Args& a) {
+            return pick(solenoid_field({a.radius, a.length, a.turns, a.current}, a.z, a.r, want));
+        },
+        work::kSolenoidField);
+}
+
+}  // namespace
+
+template <> Implementation implement<fn::SOLENOID_BZ>() {
+    return solenoid_component<fn::SOLENOID_BZ>(Components::Axial, [](const FieldRZ& f) { return f.bz; });
+}
+template <> Implementation implement<fn::SOLENOID_BR>() {
+    return solenoid_component<fn::SOLENOID_BR>(Components::Radial, [](const FieldRZ& f) { return f.br; });
+}
+template <> Implementation implement<fn::SOLENOID_B>() {
+    return solenoid_component<fn::SOLENOID_B>(Components::Both, [](const FieldRZ& f) { return f.magnitude(); });
 }
 
 }  // namespace coilwright::sheet

@@ -10,11 +10,12 @@ namespace coilwright::sheet {
 
 namespace {
 
-// The sum of the rows' fields at (z, r), the arguments after the table (idl/functions/40_stack.toml).
-Implementation stack_component(const char* name, double (*pick)(const FieldRZ&)) {
-    return on_coil_table(
-        name, [pick](const CoilTable& t, const double* a) { return pick(table_field(t, a[0], a[1])); },
-        field_point_cost);
+// The sum of the rows' fields at (z, r).
+template <class Fn>
+Implementation stack_component(double (*pick)(const FieldRZ&)) {
+    return on_coil_table<Fn>(
+        [pick](const CoilTable& t, const typename Fn::Args& a) { return pick(table_field(t, a.z, a.r)); },
+        field_points(1));
 }
 
 const char* kind_name(CoilRow::Kind kind, bool plural) {
@@ -52,13 +53,15 @@ std::string check_table(std::span<const Arg* const> tables) {
 
 }  // namespace
 
-std::vector<Implementation> stack_functions() {
-    return {
-        stack_component("STACK_BZ", [](const FieldRZ& f) { return f.bz; }),
-        stack_component("STACK_BR", [](const FieldRZ& f) { return f.br; }),
-        stack_component("STACK_B", [](const FieldRZ& f) { return f.magnitude(); }),
-        text_result("STACK_CHECK", check_table),
-    };
+template <> Implementation implement<fn::STACK_BZ>() {
+    return stack_component<fn::STACK_BZ>([](const FieldRZ& f) { return f.bz; });
 }
+template <> Implementation implement<fn::STACK_BR>() {
+    return stack_component<fn::STACK_BR>([](const FieldRZ& f) { return f.br; });
+}
+template <> Implementation implement<fn::STACK_B>() {
+    return stack_component<fn::STACK_B>([](const FieldRZ& f) { return f.magnitude(); });
+}
+template <> Implementation implement<fn::STACK_CHECK>() { return text_result<fn::STACK_CHECK>(check_table); }
 
 }  // namespace coilwright::sheet

@@ -4,19 +4,40 @@
 
 namespace coilwright::sheet {
 
-std::vector<Implementation> wire_functions() {
-    // Argument order as in idl/functions/60_wire.toml; "material" arrives as its choice value.
-    return {
-        numeric("AWG_DIAMETER", [](const double* a) { return awg_diameter(a[0]); }),
-        numeric("WIRE_AREA", [](const double* a) { return wire_area(a[0]); }),
-        numeric("WIRE_RESISTIVITY", [](const double* a) { return resistivity(conductor_from_index(a[0]), a[1]); }),
-        numeric("WIRE_RESISTANCE",
-                [](const double* a) { return wire_resistance(a[0], a[1], conductor_from_index(a[2]), a[3]); }),
-        numeric("WIRE_RESISTANCE_PER_M",
-                [](const double* a) { return wire_resistance(a[0], 1.0, conductor_from_index(a[1]), a[2]); }),
-        numeric("WIRE_MASS", [](const double* a) { return wire_mass(a[0], a[1], conductor_from_index(a[2])); }),
-        numeric("WIRE_DIAMETER_FOR_CURRENT", [](const double* a) { return wire_diameter_for_current(a[0], a[1]); }),
-    };
+template <> Implementation implement<fn::AWG_DIAMETER>() {
+    return numeric<fn::AWG_DIAMETER>([](const fn::AWG_DIAMETER::Args& a) { return awg_diameter(a.gauge); });
+}
+
+template <> Implementation implement<fn::WIRE_AREA>() {
+    return numeric<fn::WIRE_AREA>([](const fn::WIRE_AREA::Args& a) { return wire_area(a.bareDiameter); });
+}
+
+template <> Implementation implement<fn::WIRE_RESISTIVITY>() {
+    return numeric<fn::WIRE_RESISTIVITY>(
+        [](const fn::WIRE_RESISTIVITY::Args& a) { return resistivity(a.material, a.temperature); });
+}
+
+template <> Implementation implement<fn::WIRE_RESISTANCE>() {
+    return numeric<fn::WIRE_RESISTANCE>([](const fn::WIRE_RESISTANCE::Args& a) {
+        return wire_resistance(a.bareDiameter, a.length, a.material, a.temperature);
+    });
+}
+
+template <> Implementation implement<fn::WIRE_RESISTANCE_PER_M>() {
+    return numeric<fn::WIRE_RESISTANCE_PER_M>([](const fn::WIRE_RESISTANCE_PER_M::Args& a) {
+        return wire_resistance(a.bareDiameter, 1.0, a.material, a.temperature);
+    });
+}
+
+template <> Implementation implement<fn::WIRE_MASS>() {
+    return numeric<fn::WIRE_MASS>(
+        [](const fn::WIRE_MASS::Args& a) { return wire_mass(a.bareDiameter, a.length, a.material); });
+}
+
+template <> Implementation implement<fn::WIRE_DIAMETER_FOR_CURRENT>() {
+    return numeric<fn::WIRE_DIAMETER_FOR_CURRENT>([](const fn::WIRE_DIAMETER_FOR_CURRENT::Args& a) {
+        return wire_diameter_for_current(a.current, a.currentDensity);
+    });
 }
 
 }  // namespace coilwright::sheet

@@ -23,7 +23,6 @@ TEST(CoilStack, KindsFollowTheSheetColumns) {
     EXPECT_EQ(kTable.rows()[1].kind(), CoilRow::Kind::ThinSolenoid);
     EXPECT_EQ(kTable.rows()[2].kind(), CoilRow::Kind::FlatSpiral);
     EXPECT_EQ(kTable.rows()[3].kind(), CoilRow::Kind::Thick);
-    for (const CoilRow& row : kTable.rows()) EXPECT_GE(row_cost(row), 1.0);
 }
 
 TEST(CoilStack, FieldIsTheSumOfTheRows) {

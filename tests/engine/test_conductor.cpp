@@ -77,8 +77,7 @@ TEST(Conductor, BadArgumentsAreErrors) {
     EXPECT_THROW(wire_resistance(1e-3, 1.0, Conductor::Copper, -150.0), DomainError);
     EXPECT_THROW(wire_resistance(1e-3, 1.0, Conductor::Copper, 401.0), DomainError);
     EXPECT_THROW(wire_resistance(1e-3, 1.0, Conductor::Copper, std::nan("")), DomainError);
-    EXPECT_THROW(conductor_from_index(2.0), DomainError);
-    EXPECT_THROW(conductor_from_index(0.5), DomainError);
+    EXPECT_THROW(resistivity(static_cast<Conductor>(2), 20.0), DomainError);
     EXPECT_THROW(wire_diameter_for_current(1.0, 0.0), DomainError);
     EXPECT_THROW(wire_diameter_for_current(0.0, 1e6), DomainError);
     EXPECT_THROW(wire_mass(1e150, 1e10, Conductor::Copper), DomainError);  // overflows: an error

@@ -11,6 +11,7 @@
 
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "field/loop_batch_code.hpp"
 
 using namespace coilwright;
 using internal::BatchCode;

@@ -9,6 +9,7 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "coilwright/design.hpp"
+#include "field/rect_kernel.hpp"
 
 using namespace coilwright;
 using Eigen::Vector3d;

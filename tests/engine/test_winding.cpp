@@ -97,5 +97,5 @@ TEST(Winding, BadArgumentsAreErrors) {
     EXPECT_THROW(winding_wire_length(0.0, 10e-3, 1e-3, 5, kSq), DomainError);
     EXPECT_THROW(winding_mean_turn(0.2, 0.1), DomainError);
     EXPECT_THROW(winding_mean_turn_rect(0.2, -0.1, 0.0), DomainError);
-    EXPECT_THROW(packing_from_index(2), DomainError);
+    EXPECT_THROW(winding_layers(5e-3, 1e-3, static_cast<Packing>(2)), DomainError);
 }

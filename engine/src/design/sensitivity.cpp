@@ -121,4 +121,13 @@ double uniform_length_sensitivity(const CoilTable& table, std::size_t index, Coi
     return std::min({up, down, 0.0});
 }
 
+double sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter, SensitivityQuantity quantity,
+                   double z0, double tolerance) {
+    switch (quantity) {
+        case SensitivityQuantity::Field: return field_sensitivity(table, index, parameter, z0);
+        case SensitivityQuantity::Uniform: return uniform_length_sensitivity(table, index, parameter, z0, tolerance);
+    }
+    raise_domain_error("quantity must be field or uniform");
+}
+
 }  // namespace coilwright

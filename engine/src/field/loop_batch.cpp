@@ -12,6 +12,7 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "field/loop_kernel.hpp"
+#include "field/loop_batch_code.hpp"
 
 namespace coilwright {
 

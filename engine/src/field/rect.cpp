@@ -30,6 +30,7 @@
 #include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "field/rect_kernel.hpp"
 
 namespace coilwright {
 

@@ -28,18 +28,6 @@ FieldRZ row_field(const CoilRow& row, double z, double r) {
     raise_domain_error("unknown coil kind");
 }
 
-double row_cost(const CoilRow& row) {
-    // CPU time per point relative to one loop evaluation, measured by tests/engine/
-    // test_field_timing.cpp (typical points near the coil) and rounded up.
-    switch (row.kind()) {
-        case CoilRow::Kind::Loop: return 1.0;
-        case CoilRow::Kind::ThinSolenoid: return 8.0;
-        case CoilRow::Kind::FlatSpiral: return 40.0;
-        case CoilRow::Kind::Thick: return 100.0;
-    }
-    return 100.0;
-}
-
 FieldRZ table_field(const CoilTable& table, double z, double r) {
     check::finite(z, "z");
     check::non_negative(r, "r");

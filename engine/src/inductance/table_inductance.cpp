@@ -165,10 +165,4 @@ MatrixWithProblems axial_forces(const CoilTable& table) {
     return f;
 }
 
-double table_work_estimate(const CoilTable& table) {
-    // Typical evaluation counts: a self term or a touching pair ~5e4, a distant pair ~1e3.
-    const double n = static_cast<double>(table.size());
-    return 5e4 * n + 1e4 * n * (n - 1) / 2;
-}
-
 }  // namespace coilwright

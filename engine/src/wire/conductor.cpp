@@ -13,15 +13,15 @@ using namespace internal;
 
 namespace {
 // 1 ohm mm^2 / m = 1e-6 ohm m.
-constexpr ConductorData kCopper{"copper", 1e-6 / 58.0, 0.00393, 8890.0};
-constexpr ConductorData kAluminium{"aluminium", 0.028264e-6, 0.00403, 2703.0};
+constexpr ConductorData kCopper{1e-6 / 58.0, 0.00393, 8890.0};
+constexpr ConductorData kAluminium{0.028264e-6, 0.00403, 2703.0};
 }  // namespace
 
-const ConductorData& conductor_data(Conductor c) { return c == Conductor::Copper ? kCopper : kAluminium; }
-
-Conductor conductor_from_index(double index) {
-    if (index == 0.0) return Conductor::Copper;
-    if (index == 1.0) return Conductor::Aluminium;
+const ConductorData& conductor_data(Conductor c) {
+    switch (c) {
+        case Conductor::Copper: return kCopper;
+        case Conductor::Aluminium: return kAluminium;
+    }
     raise_domain_error("material must be copper or aluminium");
 }
 

@@ -32,7 +32,12 @@ struct LayerTurns {
     double odd, even;
 };
 
+void check_packing(Packing packing) {
+    if (packing != Packing::Square && packing != Packing::Hexagonal) raise_domain_error("packing must be square or hexagonal");
+}
+
 LayerTurns layer_turns(double length, double d, Packing packing) {
+    check_packing(packing);
     const double odd = checked_count(whole(length / d), "turns per layer");
     if (packing == Packing::Square) return {odd, odd};
     // Below 1.5 d the second layer has no groove to lie in: the winding is not hexagonal.
@@ -42,7 +47,10 @@ LayerTurns layer_turns(double length, double d, Packing packing) {
     return {odd, even};
 }
 
-double pitch(double d, Packing packing) { return packing == Packing::Square ? d : kHexPitch * d; }
+double pitch(double d, Packing packing) {
+    check_packing(packing);
+    return packing == Packing::Square ? d : kHexPitch * d;
+}
 
 double whole_turns(double turns) {
     check::non_negative(turns, "turns");
@@ -62,15 +70,10 @@ double layers_for(double n, const LayerTurns& t) {
 
 }  // namespace
 
-Packing packing_from_index(double index) {
-    if (index == 0.0) return Packing::Square;
-    if (index == 1.0) return Packing::Hexagonal;
-    raise_domain_error("packing must be square or hexagonal");
-}
-
 double winding_layers(double build, double wire_diameter, Packing packing) {
     check::non_negative(build, "build");
     check::positive(wire_diameter, "wire diameter");
+    check_packing(packing);
     const double ratio = build / wire_diameter;
     if (packing == Packing::Square) return checked_count(whole(ratio), "layers");
     if (whole(ratio) < 1.0) return 0.0;

@@ -9,8 +9,9 @@
 
 namespace coilwright {
 
+// The values are those of the spreadsheet's choice set coilParameter (idl/addin.toml).
 enum class CoilParameter {
-    Radius,    // inner and outer radius together (the only radius of a thin row), m
+    Radius = 0,  // inner and outer radius together (the only radius of a thin row), m
     Inner,     // inner radius alone (thick rows), m
     Outer,     // outer radius alone (thick rows), m
     Length,    // axial length, m (a loop grows into a short solenoid)
@@ -30,6 +31,14 @@ double field_sensitivity(const CoilTable& table, std::size_t index, CoilParamete
 // design the half-length has a kink, which this one-sided measure handles.
 double uniform_length_sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter,
                                   double z0, double tolerance);
+
+// What a sensitivity is of: the axial field at z0, or the axial uniform half-length.
+enum class SensitivityQuantity { Field = 0, Uniform = 1 };
+
+// field_sensitivity or uniform_length_sensitivity, as `quantity` says (tolerance is used for
+// Uniform only).
+double sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter, SensitivityQuantity quantity,
+                   double z0, double tolerance);
 
 // The table with one parameter of one row moved by delta (validated).
 CoilTable perturbed(const CoilTable& table, std::size_t index, CoilParameter parameter, double delta);

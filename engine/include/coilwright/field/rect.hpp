@@ -25,11 +25,4 @@ Eigen::Vector3d rect_field(const RectSpec& rect, const Eigen::Vector3d& point);
 // Two identical rectangles at z = -spacing/2 and z = +spacing/2 carrying the same current.
 Eigen::Vector3d rect_pair_field(const RectSpec& rect, double spacing, const Eigen::Vector3d& point);
 
-
-namespace internal {
-// The closed-form evaluation in scaled units, exposed for tests: half-width a, half-height b
-// and point p in units of the half-diagonal s (a^2 + b^2 = 1); field in units of mu0 I / (4 pi s).
-Eigen::Vector3d rect_field_scaled(double a, double b, const Eigen::Vector3d& p);
-}  // namespace internal
-
 }  // namespace coilwright

@@ -15,7 +15,4 @@ FieldRZ table_field(const CoilTable& table, double z, double r);
 // Field of one row at (z, r) in the table's coordinates.
 FieldRZ row_field(const CoilRow& row, double z, double r);
 
-// Work of one row per field point, in loop-field evaluations (typical, for bounding a call).
-double row_cost(const CoilRow& row);
-
 }  // namespace coilwright

@@ -41,8 +41,4 @@ double stored_energy(const CoilTable& table, std::optional<double> loop_wire_dia
 // Axial force (N, positive towards +z) on each row from all the other rows: an n x 1 column.
 MatrixWithProblems axial_forces(const CoilTable& table);
 
-// A bound of the work (in kernel evaluations) the functions above may need, for refusing
-// tables that would freeze a spreadsheet.
-double table_work_estimate(const CoilTable& table);
-
 }  // namespace coilwright

@@ -3,12 +3,11 @@
 
 namespace coilwright {
 
-// Conductor materials. The numbers are the indices the spreadsheet's "material" argument
-// converts to (idl/functions/60_wire.toml): keep them in step.
+// Conductor materials (the spreadsheet's choice set "material" of idl/addin.toml; the generated
+// argument structs check the values at compile time).
 enum class Conductor { Copper = 0, Aluminium = 1 };
 
 struct ConductorData {
-    const char* name;
     double resistivity_20;    // ohm m at 20 C
     double temp_coefficient;  // 1/K, of the resistance at 20 C
     double density;           // kg/m^3 at 20 C
@@ -16,11 +15,9 @@ struct ConductorData {
 
 // Copper: IEC 60028 (annealed copper standard): 1/58 ohm mm^2/m, 0.00393 /K, 8890 kg/m^3.
 // Aluminium: IEC 60889 (hard-drawn aluminium wire): 0.028264 ohm mm^2/m, 0.00403 /K,
-// 2703 kg/m^3 (values quoted from memory of the standards).
+// 2703 kg/m^3 (values quoted from memory of the standards). DomainError for a value that
+// names no conductor.
 const ConductorData& conductor_data(Conductor c);
-
-// The conductor for a spreadsheet choice index; throws DomainError for anything else.
-Conductor conductor_from_index(double index);
 
 // Temperatures (C) accepted by the linear resistance law below: from -100 to 400 C.
 inline constexpr double kMinConductorTemperature = -100.0;

@@ -12,11 +12,10 @@
 
 namespace coilwright {
 
-// The numbers are the indices the spreadsheet's "packing" argument converts to
-// (idl/functions/70_winding.toml): keep them in step.
+// How round wire packs in a winding (the spreadsheet's choice set "packing" of idl/addin.toml;
+// the generated argument structs check the values at compile time). A value that names no
+// packing is a DomainError.
 enum class Packing { Square = 0, Hexagonal = 1 };
-
-Packing packing_from_index(double index);
 
 // Layers that fit in a radial build (m) for wire of overall diameter d (m).
 double winding_layers(double build, double wire_diameter, Packing packing);

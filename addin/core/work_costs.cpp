@@ -1,0 +1,24 @@
+#include "work_costs.hpp"
+
+namespace coilwright::sheet::work {
+
+double field_point(const CoilTable& table) {
+    double cost = 0.0;
+    for (const CoilRow& row : table.rows()) {
+        switch (row.kind()) {
+            case CoilRow::Kind::Loop: cost += kLoopField; break;
+            case CoilRow::Kind::ThinSolenoid: cost += kSolenoidField; break;
+            case CoilRow::Kind::FlatSpiral: cost += kFlatSpiralField; break;
+            case CoilRow::Kind::Thick: cost += kThickField; break;
+        }
+    }
+    return cost;
+}
+
+double inductance_matrix(const CoilTable& table) {
+    // A self term or a touching pair costs about a thick-coil inductance, a distant pair less.
+    const double n = static_cast<double>(table.size());
+    return kThickInductance * n + 0.2 * kThickInductance * n * (n - 1) / 2;
+}
+
+}  // namespace coilwright::sheet::work
