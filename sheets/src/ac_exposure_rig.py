@@ -1,6 +1,6 @@
 """Demo scenario (invented): an AC Helmholtz exposure rig at 1 kHz, fed through a series resonance.
 
-Requirement: 100 uT (amplitude) at 1 kHz at the centre of a Helmholtz pair of 150 mm radius,
+Requirement: 1 mT (amplitude) at 1 kHz at the centre of a Helmholtz pair of 150 mm radius,
 uniform to 1 % over a sample dish, from an audio power amplifier of 40 V amplitude. A capacitor
 in series tunes the coils to 1 kHz, so the amplifier only has to overcome the AC resistance;
 the capacitor then carries Q times the amplifier's voltage. The sheet sizes the winding, its AC
@@ -21,7 +21,7 @@ def build(book):
                  "sqrt(2). Yellow cells are inputs; blue cells are computed.")
 
     s.header("A4", "Requirement and choices")
-    s.input(5, "Field amplitude at the centre", "target_uT", 100, "uT", "", fmt="0.0")
+    s.input(5, "Field amplitude at the centre", "target_uT", 1000, "uT", "", fmt="0.0")
     s.input(6, "Frequency", "freq", 1000, "Hz", "", fmt="0")
     s.input(7, "Sample radius (sphere)", "sample_r", 0.03, "m", "", fmt="0.000")
     s.input(8, "Allowed deviation over the sample", "tol", 0.01, "", "fraction of the centre field", fmt="0.000")
@@ -31,9 +31,9 @@ def build(book):
     s.text("B11", "18", fill=0xFFF5CC)
     s.define_name("gauge", "B11")
     s.input(12, "Enamel thickness added to the diameter", "enamel", 0.00006, "m", "demo value", fmt="0.00000")
-    s.input(13, "Layers per coil", "layers", 6, "", "whole layers, square packing", fmt="0")
+    s.input(13, "Layers per coil", "layers", 10, "", "whole layers, square packing", fmt="0")
     s.input(14, "Amplifier output (amplitude)", "amp_v", 40, "V", "demo value", fmt="0.0")
-    s.input(15, "Capacitor voltage rating (amplitude)", "cap_rating", 1000, "V",
+    s.input(15, "Capacitor voltage rating (amplitude)", "cap_rating", 400, "V",
             "from the capacitor's data sheet, for AC at this frequency (demo value)", fmt="0")
     s.input(16, "Ambient temperature", "ambient", 25, "C", "", fmt="0.0")
     s.input(17, "Heat-transfer coefficient", "h_conv", 10, "W/(m^2 K)", "still room air (common practice)", fmt="0.0")
