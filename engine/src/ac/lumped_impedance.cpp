@@ -1,7 +1,7 @@
 // Impedance and drive voltage of a winding, series resonance.
+#include <charconv>
 #include <cmath>
 #include <complex>
-#include <cstdio>
 #include <string>
 
 #include "ac/lumped.hpp"
@@ -22,12 +22,11 @@ void check_lumped(double resistance, double inductance, double frequency, double
     if (inductance > 0.0 && self_capacitance > 0.0) {
         const double srf = 1.0 / (2.0 * kPi * std::sqrt(inductance) * std::sqrt(self_capacitance));
         if (frequency > srf) {
-            char text[200];
-            std::snprintf(text, sizeof text,
-                          "frequency is above the self-resonance (%.4g Hz): there the winding acts as a distributed "
-                          "line that the lumped model does not describe",
-                          srf);
-            throw DomainError(text);
+            char number[32];
+            const auto end = std::to_chars(number, number + sizeof number, srf, std::chars_format::general, 4).ptr;
+            throw DomainError("frequency is above the self-resonance (" + std::string(number, end) +
+                              " Hz): there the winding acts as a distributed line that the lumped model does not "
+                              "describe");
         }
     }
 }
