@@ -20,8 +20,8 @@ TEST(CoilImpedance, IsTheAdmittanceSumOfItsBranches) {
         const double w = 2.0 * kPiLit * f;
         const std::complex<double> z = 1.0 / (1.0 / std::complex<double>(r, w * l) + std::complex<double>(0.0, w * c));
         const Impedance got = coil_impedance(r, l, f, c);
-        EXPECT_NEAR(got.magnitude / std::abs(z), 1.0, 1e-13) << f;
-        EXPECT_NEAR(got.phase, std::arg(z) * 180.0 / kPiLit, 1e-11) << f;
+        EXPECT_NEAR(got.magnitude / std::abs(z), 1.0, 1e-14) << f;
+        EXPECT_NEAR(got.phase, std::arg(z) * 180.0 / kPiLit, 1e-12) << f;
     }
     // Without a capacitance: |R + jwL| and atan(wL/R); at 0 Hz the resistance, phase 0.
     EXPECT_DOUBLE_EQ(coil_impedance(3.0, 1e-3, 0.0, 0.0).magnitude, 3.0);

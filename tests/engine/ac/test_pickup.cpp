@@ -53,7 +53,7 @@ TEST(PickupSensitivity, FaradayBelowResonanceAndTheDivider) {
     // With it: w N A / |1 - w^2 L C + j w R C|.
     const double f = 20e3, w = 2.0 * kPiLit * f;
     const double divider = std::hypot(1.0 - w * w * l * c, w * r * c);
-    EXPECT_NEAR(pickup_sensitivity(n, a, f, r, l, c) / (w * n * a / divider), 1.0, 1e-13);
+    EXPECT_NEAR(pickup_sensitivity(n, a, f, r, l, c) / (w * n * a / divider), 1.0, 1e-14);
     // Near the resonance it rises by about Q; above it the model stops holding.
     EXPECT_GT(pickup_sensitivity(n, a, 0.99 * coil_srf(l, c), r, l, c), 2.0 * w * n * a);
     EXPECT_THROW(pickup_sensitivity(n, a, 1.01 * coil_srf(l, c), r, l, c), DomainError);
@@ -83,7 +83,7 @@ TEST(PickupNef, NoiseOverSensitivity) {
     const double s = pickup_sensitivity(n, a, f, r, l, c);
     const double divider = 2.0 * kPiLit * f * n * a / s;
     const double nef = std::hypot(thermal / divider, ea) / s;
-    EXPECT_NEAR(pickup_nef(n, a, f, r, t, l, c, ea) / nef, 1.0, 1e-13);
+    EXPECT_NEAR(pickup_nef(n, a, f, r, t, l, c, ea) / nef, 1.0, 1e-14);
     EXPECT_THROW(pickup_nef(n, a, 0.0, r, t, l, c, ea), DomainError);
     EXPECT_THROW(pickup_nef(n, a, 1.01 * coil_srf(l, c), r, t, l, c, ea), DomainError);
     EXPECT_THROW(pickup_nef(0.0, a, f, r, t, l, c, ea), DomainError);
