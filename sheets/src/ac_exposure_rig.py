@@ -40,8 +40,9 @@ def build(book):
     s.text("A18", "Insulation thermal class")
     s.text("B18", "B", fill=0xFFF5CC)
     s.define_name("ins_class", "B18")
-    s.input(19, "SITE INPUT: exposure limit for people (field amplitude at this frequency)", "limit_uT", 50, "uT",
-            "DEMO VALUE: enter the limit your site's applicable guideline sets for this frequency", fmt="0.0")
+    s.input(19, "SITE INPUT: exposure limit for people", "limit_uT", 50, "uT",
+            "field amplitude. DEMO VALUE: enter the limit of the guideline your site applies at this frequency",
+            fmt="0.0")
 
     s.header("A21", "Winding")
     s.result(22, "Bare wire diameter", "wire_d", "=AWG_DIAMETER(gauge)", "m", "ASTM B258", fmt="0.000000")
