@@ -36,7 +36,8 @@ double dowell_factor(double delta_norm, double layers);
 //   Delta = (pi/4)^(3/4) (d / delta) sqrt(d / pitch).
 // Litz wire: bare_diameter is the strand diameter, wire_diameter the bundle's (the pitch of
 // the turns); the sqrt(n) strands across each bundle are sqrt(n) strand layers per winding
-// layer at the strand pitch wire_diameter / sqrt(n) (so one strand is the solid wire).
+// layer at the strand pitch wire_diameter / sqrt(n) (common practice for litz in Dowell's model;
+// one strand is the solid wire).
 // Validity (stated in the help): a one-dimensional field parallel to the layers (long layers
 // filling the winding length), close winding; litz strands twisted so they share the current.
 double coil_rac_ratio(double bare_diameter, double wire_diameter, double frequency, double layers, double strands,
