@@ -1,6 +1,6 @@
 // SKIN_DEPTH, *_RAC_RATIO, COIL_C_SELF, COIL_SRF, COIL_Z, COIL_PHASE, COIL_VOLTAGE_AC, RESONANCE_*.
 #include "coilwright/ac.hpp"
-#include "coilwright/conductor.hpp"
+#include "coilwright/wire.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

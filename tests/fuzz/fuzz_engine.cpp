@@ -10,12 +10,12 @@
 #include <vector>
 
 #include "coilwright/ac.hpp"
-#include "coilwright/bulirsch_cel.hpp"
 #include "coilwright/coil_table.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
+#include "numerics/bulirsch_cel.hpp"
 
 using namespace coilwright;
 using coilwright::fuzz::FuzzInput;

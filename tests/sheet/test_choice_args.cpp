@@ -1,8 +1,7 @@
 // "choice" arguments: text from a fixed list, case-insensitive, converted before broadcasting.
 #include <gtest/gtest.h>
 
-#include "coilwright/budget.hpp"
-#include "coilwright/conductor.hpp"
+#include "coilwright/wire.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 #include "call_by_name.hpp"

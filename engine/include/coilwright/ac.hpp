@@ -4,7 +4,7 @@
 // amplitude). Temperatures in degrees Celsius.
 #pragma once
 
-#include "coilwright/conductor.hpp"
+#include "coilwright/wire/conductor.hpp"
 
 namespace coilwright {
 

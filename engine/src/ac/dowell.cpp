@@ -4,11 +4,14 @@
 #include <cmath>
 
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
+#include "numerics/policy.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
+
+using namespace internal;
 
 namespace {
 
@@ -16,12 +19,12 @@ namespace {
 double sinh_minus_sin(double x) {
     const double x4 = x * x * x * x;
     double term = x * x * x / 6.0, sum = term;
-    for (int k = 1; k <= 30; ++k) {
+    StepBudget budget(30, "the series of sinh x - sin x");
+    for (int k = 1;; ++k, budget.step()) {
         term *= x4 / ((4.0 * k) * (4.0 * k + 1) * (4.0 * k + 2) * (4.0 * k + 3));
         sum += term;
         if (term <= 1e-17 * sum) return 2.0 * sum;
     }
-    throw ConvergenceError("the series of sinh x - sin x did not settle");
 }
 
 // The skin term (sinh 2D + sin 2D) / (cosh 2D - cos 2D) and the proximity term
@@ -59,7 +62,7 @@ double dowell_factor(double delta_norm, double layers) {
     return check::finite_result(delta_norm * (t.skin + 2.0 * (m2 - 1.0) / 3.0 * t.proximity), "AC resistance ratio");
 }
 
-namespace ac {
+namespace internal {
 
 double round_wire_delta(double diameter, double pitch, double skin_depth) {
     // (pi/4)^(3/4)
@@ -67,6 +70,6 @@ double round_wire_delta(double diameter, double pitch, double skin_depth) {
     return k * (diameter / skin_depth) * std::sqrt(diameter / pitch);
 }
 
-}  // namespace ac
+}  // namespace internal
 
 }  // namespace coilwright

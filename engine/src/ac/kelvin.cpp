@@ -3,11 +3,12 @@
 #include <cmath>
 #include <complex>
 
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
+#include "numerics/policy.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
-namespace coilwright::ac {
+namespace coilwright::internal {
 
 namespace {
 
@@ -27,7 +28,8 @@ Kelvin0 ascending_series(double x) {
     long double w = 1.0L;  // w_1
     long double ber = 1.0L, bei = 0.0L, dber = 0.0L, dbei = 0.0L;
     const long double root_u = std::sqrt(u);
-    for (int j = 1; j <= kMaxSeriesTerms; ++j) {
+    StepBudget budget(kMaxSeriesTerms, "the Kelvin-function series");
+    for (int j = 1;; ++j, budget.step()) {
         t *= u / (static_cast<long double>(j) * j);
         if (j >= 2) w *= u / (static_cast<long double>(j) * (j - 1));
         const bool plus = (j % 4 == 0) || (j % 4 == 1);
@@ -48,27 +50,27 @@ Kelvin0 ascending_series(double x) {
                     static_cast<double>(half_x * dbei), 0.0};
         }
     }
-    throw ConvergenceError("the Kelvin-function series did not settle");
 }
 
 // Hankel's sums P(+-) = sum_k (+-i)^k a_k(nu) / q^k, a_k = a_(k-1) (4 nu^2 - (2k-1)^2) / (8k)
 // (DLMF 10.17.1), summed until the terms fall below 1e-17 of the sum; an asymptotic series
-// whose terms turn to grow before that has no answer here (ConvergenceError).
+// whose terms turn to grow before that has no answer here (ConvergenceError, as is running out
+// of its step budget).
 Complex hankel_sum(int nu, Complex q, double sign) {
     const double mu = 4.0 * nu * nu;
     const Complex step = Complex(0.0, sign) / q;
     Complex term = 1.0, sum = 1.0;
     double previous = 1.0;
-    for (int k = 1; k <= kMaxAsymptoticTerms; ++k) {
+    StepBudget budget(kMaxAsymptoticTerms, "the Kelvin-function asymptotic series");
+    for (int k = 1;; ++k, budget.step()) {
         const double odd = 2.0 * k - 1.0;
         term *= step * ((mu - odd * odd) / (8.0 * k));
         sum += term;
         const double size = std::abs(term);
         if (size <= 1e-17 * std::abs(sum)) return sum;
-        if (size > previous) break;
+        if (size > previous) raise_no_convergence("the Kelvin-function asymptotic series");
         previous = size;
     }
-    throw ConvergenceError("the Kelvin-function asymptotic series did not settle");
 }
 
 // e^{i x/sqrt2} with the phase carried to twice double precision: x/sqrt2 = hi + lo exactly to
@@ -119,4 +121,4 @@ double round_wire_resistance_ratio(double x) {
     return check::finite_result(0.5 * x * (numerator / denominator), "AC resistance ratio");
 }
 
-}  // namespace coilwright::ac
+}  // namespace coilwright::internal

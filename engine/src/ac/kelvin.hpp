@@ -2,7 +2,7 @@
 // Bessel functions: ber x + i bei x = J0(x e^{3 pi i/4}), ber' x + i bei' x = -e^{3 pi i/4} J1(...).
 #pragma once
 
-namespace coilwright::ac {
+namespace coilwright::internal {
 
 // ber, bei, ber', bei' at x, each multiplied by e^{-log_scale}: the true value of ber x is
 // ber * exp(log_scale). log_scale is 0 where the power series is used and x / sqrt(2) beyond,
@@ -29,4 +29,4 @@ Kelvin0 kelvin0(double x);
 // (x/2) (ber bei' - bei ber') / (ber'^2 + bei'^2), exactly 1 at x = 0.
 double round_wire_resistance_ratio(double x);
 
-}  // namespace coilwright::ac
+}  // namespace coilwright::internal

@@ -4,10 +4,12 @@
 
 #include "ac/dowell.hpp"
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
+
+using namespace internal;
 
 namespace {
 
@@ -37,7 +39,7 @@ double coil_rac_ratio(double bare_diameter, double wire_diameter, double frequen
         return 1.0;
     }
     const double delta = skin_depth(frequency, c, temperature_c);
-    return dowell_factor(ac::round_wire_delta(bare_diameter, strand_pitch, delta), layers * across);
+    return dowell_factor(internal::round_wire_delta(bare_diameter, strand_pitch, delta), layers * across);
 }
 
 }  // namespace coilwright

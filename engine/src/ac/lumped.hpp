@@ -3,7 +3,7 @@
 
 #include <complex>
 
-namespace coilwright::ac {
+namespace coilwright::internal {
 
 // Checks R, L, f, C (all >= 0, finite) and that f is at or below the self-resonance when L and
 // C are both > 0 (DomainError with the resonance in the message otherwise).
@@ -13,4 +13,4 @@ void check_lumped(double resistance, double inductance, double frequency, double
 std::complex<double> capacitive_divider(double resistance, double inductance, double frequency,
                                         double self_capacitance);
 
-}  // namespace coilwright::ac
+}  // namespace coilwright::internal

@@ -6,13 +6,15 @@
 
 #include "ac/lumped.hpp"
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
 
-namespace ac {
+using namespace internal;
+
+namespace internal {
 
 void check_lumped(double resistance, double inductance, double frequency, double self_capacitance) {
     check::non_negative(resistance, "resistance");
@@ -39,13 +41,13 @@ std::complex<double> capacitive_divider(double resistance, double inductance, do
     return {1.0 - wlc * wlc, w * resistance * self_capacitance};
 }
 
-}  // namespace ac
+}  // namespace internal
 
 Impedance coil_impedance(double resistance, double inductance, double frequency, double self_capacitance) {
-    ac::check_lumped(resistance, inductance, frequency, self_capacitance);
+    internal::check_lumped(resistance, inductance, frequency, self_capacitance);
     const double w = 2.0 * kPi * frequency;
     const std::complex<double> series(resistance, w * inductance);
-    const std::complex<double> divider = ac::capacitive_divider(resistance, inductance, frequency, self_capacitance);
+    const std::complex<double> divider = internal::capacitive_divider(resistance, inductance, frequency, self_capacitance);
     if (divider == 0.0)
         throw SingularPointError("the impedance of a lossless winding is infinite at its self-resonance");
     const std::complex<double> z = series / divider;

@@ -4,11 +4,13 @@
 
 #include "ac/lumped.hpp"
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
+
+using namespace internal;
 
 namespace {
 
@@ -41,8 +43,8 @@ double pickup_sensitivity(double turns, double area, double frequency, double re
                           double self_capacitance) {
     check::non_negative(turns, "turns");
     check::non_negative(area, "area");
-    ac::check_lumped(resistance, inductance, frequency, self_capacitance);
-    const double divider = std::abs(ac::capacitive_divider(resistance, inductance, frequency, self_capacitance));
+    internal::check_lumped(resistance, inductance, frequency, self_capacitance);
+    const double divider = std::abs(internal::capacitive_divider(resistance, inductance, frequency, self_capacitance));
     if (divider == 0.0)
         throw SingularPointError("the sensitivity of a lossless coil is infinite at its self-resonance");
     return check::finite_result(2.0 * kPi * frequency * turns * area / divider, "sensitivity");
@@ -63,8 +65,8 @@ double pickup_nef(double turns, double area, double frequency, double resistance
         throw DomainError("frequency must be a finite number > 0 (a pickup coil sees no field at 0 Hz)");
     const double t = absolute_temperature(temperature_c);
     check::non_negative(amplifier_noise, "amplifier noise");
-    ac::check_lumped(resistance, inductance, frequency, self_capacitance);
-    const double divider = std::abs(ac::capacitive_divider(resistance, inductance, frequency, self_capacitance));
+    internal::check_lumped(resistance, inductance, frequency, self_capacitance);
+    const double divider = std::abs(internal::capacitive_divider(resistance, inductance, frequency, self_capacitance));
     // The coil's own noise passes the same divider as its EMF; the amplifier's does not:
     // NEF = sqrt(4kTR + (e_a |divider|)^2) / (w N A).
     const double thermal = 4.0 * kBoltzmann * t * resistance;

@@ -7,13 +7,15 @@
 #include <string>
 
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
 
-namespace ac {
+using namespace internal;
+
+namespace internal {
 
 namespace {
 
@@ -59,7 +61,7 @@ double turn_to_turn_capacitance_per_length(double conductor_diameter, double out
     return kEpsilon0 * (permittivity * theta / log_ratio + 1.0 / std::tan(theta / 2.0) - 1.0 / std::tan(kPi / 12.0));
 }
 
-}  // namespace ac
+}  // namespace internal
 
 double coil_self_capacitance(double inner_radius, double length, double turns, double layers, double bare_diameter,
                              double wire_diameter, double permittivity) {
@@ -81,7 +83,7 @@ double coil_self_capacitance(double inner_radius, double length, double turns, d
     if (layers == 1.0) {
         const double mean_diameter = 2.0 * inner_radius + wire_diameter;
         // H pF/cm times D cm = H D[m] 1e-10 F.
-        return check::finite_result(ac::medhurst_h(length / mean_diameter) * mean_diameter * 1e-10,
+        return check::finite_result(internal::medhurst_h(length / mean_diameter) * mean_diameter * 1e-10,
                                     "self-capacitance");
     }
     // Layers k and k+1 meet at radius r_k = ri + k d_o (square packing). Along a back-and-forth
@@ -89,7 +91,7 @@ double coil_self_capacitance(double inner_radius, double length, double turns, d
     // (1/2) C_k (4 V^2 / (3 n^2)); summed, C = (4 / (3 n^2)) sum_k C_k.
     const double n = layers;
     const double sum_radii = (n - 1.0) * inner_radius + wire_diameter * n * (n - 1.0) / 2.0;
-    const double per_length = ac::turn_to_turn_capacitance_per_length(bare_diameter, wire_diameter, permittivity);
+    const double per_length = internal::turn_to_turn_capacitance_per_length(bare_diameter, wire_diameter, permittivity);
     const double c_layers = turns_per_layer * per_length * 2.0 * kPi * sum_radii;
     return check::finite_result(4.0 / (3.0 * n * n) * c_layers, "self-capacitance");
 }

@@ -1,7 +1,7 @@
 // Pieces of the self-capacitance models, exposed for their tests.
 #pragma once
 
-namespace coilwright::ac {
+namespace coilwright::internal {
 
 // Medhurst's H (pF per cm of mean diameter) of a single-layer solenoid at length / diameter
 // ratio l_over_d in [1, 5], interpolated linearly in his table (DomainError outside it).
@@ -16,4 +16,4 @@ double medhurst_h(double l_over_d);
 // the flux tubes within +-pi/6 of the line of centres; theta >= pi/6: eps0 eps_r (pi/6) / ln.
 double turn_to_turn_capacitance_per_length(double conductor_diameter, double outer_diameter, double permittivity);
 
-}  // namespace coilwright::ac
+}  // namespace coilwright::internal

@@ -3,11 +3,13 @@
 
 #include "ac/kelvin.hpp"
 #include "coilwright/ac.hpp"
-#include "coilwright/checks.hpp"
+#include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
 namespace coilwright {
+
+using namespace internal;
 
 double skin_depth(double frequency, Conductor c, double temperature_c) {
     const double rho = resistivity(c, temperature_c);
@@ -23,7 +25,7 @@ double wire_rac_ratio(double diameter, double frequency, Conductor c, double tem
     if (frequency == 0.0) return 1.0;
     // x = sqrt2 a / delta = d / (sqrt2 delta) = d sqrt(pi f mu0 / (2 rho)).
     const double x = diameter * std::sqrt(kPi * frequency * kMu0 / (2.0 * rho));
-    return ac::round_wire_resistance_ratio(check::finite_result(x, "diameter / skin depth"));
+    return internal::round_wire_resistance_ratio(check::finite_result(x, "diameter / skin depth"));
 }
 
 }  // namespace coilwright

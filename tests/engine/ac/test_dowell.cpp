@@ -60,7 +60,7 @@ TEST(Dowell, RoundWirePorosity) {
     // Square of equal area h = d sqrt(pi)/2, porosity eta = h / p, Delta = h sqrt(eta) / delta.
     const double d = 1e-3, p = 1.1e-3, delta = 0.4e-3;
     const double h = d * std::sqrt(3.14159265358979323846) / 2.0;
-    EXPECT_NEAR(ac::round_wire_delta(d, p, delta) / (h * std::sqrt(h / p) / delta), 1.0, 1e-15);
+    EXPECT_NEAR(internal::round_wire_delta(d, p, delta) / (h * std::sqrt(h / p) / delta), 1.0, 1e-15);
 }
 
 TEST(CoilRacRatio, OneStrandIsTheSolidWire) {
@@ -70,7 +70,7 @@ TEST(CoilRacRatio, OneStrandIsTheSolidWire) {
             const double solid = coil_rac_ratio(d, p, f, layers, 1.0, Conductor::Copper, 20.0);
             const double expected =
                 f == 0.0 ? 1.0
-                         : dowell_factor(ac::round_wire_delta(d, p, skin_depth(f, Conductor::Copper, 20.0)), layers);
+                         : dowell_factor(internal::round_wire_delta(d, p, skin_depth(f, Conductor::Copper, 20.0)), layers);
             EXPECT_DOUBLE_EQ(solid, expected) << f << " " << layers;
         }
 }
@@ -79,7 +79,7 @@ TEST(CoilRacRatio, LitzIsDowellPerStrandLayer) {
     // 100 strands of 0.1 mm in a 1.2 mm bundle: 10 strand layers per winding layer at pitch 0.12 mm.
     const double f = 1e5, delta = skin_depth(f, Conductor::Copper, 20.0);
     const double litz = coil_rac_ratio(0.1e-3, 1.2e-3, f, 3.0, 100.0, Conductor::Copper, 20.0);
-    EXPECT_DOUBLE_EQ(litz, dowell_factor(ac::round_wire_delta(0.1e-3, 0.12e-3, delta), 30.0));
+    EXPECT_DOUBLE_EQ(litz, dowell_factor(internal::round_wire_delta(0.1e-3, 0.12e-3, delta), 30.0));
     // At 100 kHz such litz beats solid wire of the same copper (1 mm) in the same 3 layers.
     const double solid = coil_rac_ratio(1.0e-3, 1.2e-3, f, 3.0, 1.0, Conductor::Copper, 20.0);
     EXPECT_LT(litz, solid);

@@ -12,8 +12,8 @@
 #include "reference_csv.hpp"
 
 using namespace coilwright;
-using coilwright::ac::kelvin0;
-using coilwright::ac::round_wire_resistance_ratio;
+using coilwright::internal::kelvin0;
+using coilwright::internal::round_wire_resistance_ratio;
 
 namespace {
 
@@ -32,7 +32,7 @@ TEST(Kelvin, AgreesWithMpmathTo1em13OfTheModulus) {
     double worst = 0.0, worst_x = 0.0;
     for (const auto& row : rows) {
         const double x = row.num(0);
-        const ac::Kelvin0 k = kelvin0(x);
+        const internal::Kelvin0 k = kelvin0(x);
         const double got[4] = {rescale(k.ber, k.log_scale, x), rescale(k.bei, k.log_scale, x),
                                rescale(k.dber, k.log_scale, x), rescale(k.dbei, k.log_scale, x)};
         const double value_modulus = std::hypot(row.num(1), row.num(2));
@@ -66,12 +66,12 @@ TEST(Kelvin, ResistanceRatioAgreesWithMpmathTo1em12) {
 TEST(Kelvin, SmallArgumentLimits) {
     // A&S 9.9.10: ber x = 1 - x^4/64 + ..., bei x = x^2/4 - x^6/2304 + ... (next terms < 1e-25).
     const double x = 1e-3;
-    const ac::Kelvin0 k = kelvin0(x);
+    const internal::Kelvin0 k = kelvin0(x);
     EXPECT_DOUBLE_EQ(k.ber, 1.0 - std::pow(x, 4) / 64.0);
     EXPECT_DOUBLE_EQ(k.bei, x * x / 4.0 - std::pow(x, 6) / 2304.0);
     EXPECT_DOUBLE_EQ(k.dber, -std::pow(x, 3) / 16.0);             // d/dx of the series
     EXPECT_DOUBLE_EQ(k.dbei, x / 2.0 - 6.0 * std::pow(x, 5) / 2304.0);
-    const ac::Kelvin0 zero = kelvin0(0.0);
+    const internal::Kelvin0 zero = kelvin0(0.0);
     EXPECT_EQ(zero.ber, 1.0);
     EXPECT_EQ(zero.bei, 0.0);
     EXPECT_EQ(zero.dber, 0.0);
@@ -103,11 +103,11 @@ TEST(Kelvin, HighFrequencyLimitOfTheRatio) {
 
 TEST(Kelvin, ContinuousWhereTheMethodChanges) {
     // Power series below kKelvinSeriesLimit, Hankel's expansion above: both at the limit agree.
-    const double x = ac::kKelvinSeriesLimit;
+    const double x = internal::kKelvinSeriesLimit;
     const double below = round_wire_resistance_ratio(x);
     const double above = round_wire_resistance_ratio(std::nextafter(x, 100.0));
     EXPECT_NEAR(above / below, 1.0, 1e-14);
-    const ac::Kelvin0 s = kelvin0(x), a = kelvin0(std::nextafter(x, 100.0));
+    const internal::Kelvin0 s = kelvin0(x), a = kelvin0(std::nextafter(x, 100.0));
     const double scale = std::exp(s.log_scale - a.log_scale);
     EXPECT_NEAR(a.ber, s.ber * scale, 1e-14 * std::hypot(a.ber, a.bei));
     EXPECT_NEAR(a.dbei, s.dbei * scale, 1e-14 * std::hypot(a.dber, a.dbei));

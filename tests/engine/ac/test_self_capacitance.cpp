@@ -28,7 +28,7 @@ TEST(SelfCapacitance, SingleLayerReproducesMedhurstsTable) {
         EXPECT_NEAR(c, row[1] * 10.0 * 1e-12, 1e-24) << row[0];
     }
     // Between the points: linear interpolation (l/D = 2.25 lies halfway between 0.50 and 0.56).
-    EXPECT_NEAR(ac::medhurst_h(2.25), 0.53, 1e-15);
+    EXPECT_NEAR(internal::medhurst_h(2.25), 0.53, 1e-15);
     // Medhurst's C depends on the size and shape, not on the turns or the wire.
     EXPECT_DOUBLE_EQ(coil_self_capacitance(former, 0.2, 50.0, 1.0, 0.9e-3, wire, 3.5),
                      coil_self_capacitance(former, 0.2, 150.0, 1.0, 0.5e-3, wire, 2.0));
@@ -52,7 +52,7 @@ TEST(SelfCapacitance, TurnToTurnFormulaIsTheIntegralOfItsCell) {
                 sum += std::min(insulation, air);
             }
             const double integral = 2.0 * kEps0 * sum * (kPiLit / 6.0) / n;
-            EXPECT_NEAR(ac::turn_to_turn_capacitance_per_length(1.0, ratio, eps_r) / integral, 1.0, 1e-6)
+            EXPECT_NEAR(internal::turn_to_turn_capacitance_per_length(1.0, ratio, eps_r) / integral, 1.0, 1e-6)
                 << ratio << " " << eps_r;
         }
 }
@@ -63,7 +63,7 @@ TEST(SelfCapacitance, MultilayerIsTheEnergyOfTheTurnNetwork) {
     // neighbouring layers coupled by the cell capacitance; C = 2 E / V^2. For N turns per layer
     // the discrete sum is the continuous formula times (1 - 1/(4 N^2)) exactly.
     const double ri = 0.02, dc = 0.5e-3, d_o = 0.55e-3, eps_r = 3.5;
-    const double per_length = ac::turn_to_turn_capacitance_per_length(dc, d_o, eps_r);
+    const double per_length = internal::turn_to_turn_capacitance_per_length(dc, d_o, eps_r);
     for (int layers : {2, 3, 7})
         for (int per_layer : {10, 40}) {
             const int total = layers * per_layer;

@@ -45,7 +45,7 @@ TEST(WireRacRatio, UsesTheKelvinSolutionAtXEqualsDOverSqrt2Delta) {
     for (double d : {1e-4, 1e-3, 5e-3})
         for (double f : {50.0, 1e3, 1e5, 1e7}) {
             const double x = d / (std::sqrt(2.0) * skin_depth(f, Conductor::Copper, 20.0));
-            EXPECT_NEAR(wire_rac_ratio(d, f, Conductor::Copper, 20.0) / ac::round_wire_resistance_ratio(x), 1.0, 1e-14);
+            EXPECT_NEAR(wire_rac_ratio(d, f, Conductor::Copper, 20.0) / internal::round_wire_resistance_ratio(x), 1.0, 1e-14);
         }
 }
 
