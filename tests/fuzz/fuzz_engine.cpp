@@ -51,7 +51,7 @@ const EntryPoint kEntryPoints[] = {
          const double kc = in.number(), p = in.number(), a = in.number(), b = in.number();
          if (!(std::isfinite(kc) && kc != 0.0 && std::isfinite(p) && p > 0.0 && std::isfinite(a) && std::isfinite(b)))
              return;
-         (void)cel(kc, p, a, b);
+         (void)internal::cel(kc, p, a, b);
      }},
     {"parse_awg_gauge",
      [](FuzzInput& in) {
