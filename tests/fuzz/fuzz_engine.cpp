@@ -9,12 +9,13 @@
 #include <string>
 #include <vector>
 
-#include "numerics/bulirsch_cel.hpp"
+#include "coilwright/ac.hpp"
 #include "coilwright/coil_table.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
+#include "numerics/bulirsch_cel.hpp"
 
 using namespace coilwright;
 using coilwright::fuzz::FuzzInput;
@@ -50,7 +51,7 @@ const EntryPoint kEntryPoints[] = {
          const double kc = in.number(), p = in.number(), a = in.number(), b = in.number();
          if (!(std::isfinite(kc) && kc != 0.0 && std::isfinite(p) && p > 0.0 && std::isfinite(a) && std::isfinite(b)))
              return;
-         (void)cel(kc, p, a, b);
+         (void)internal::cel(kc, p, a, b);
      }},
     {"parse_awg_gauge",
      [](FuzzInput& in) {
@@ -65,6 +66,59 @@ const EntryPoint kEntryPoints[] = {
          for (auto& row : rows) row = {in.number(), in.number(), in.number(), in.number(), in.number(), in.number()};
          const CoilTable table(rows);
          for (const auto& row : table.rows()) (void)row.kind();
+     }},
+    // Coils at a frequency (coilwright/ac.hpp); the conductor drawn from the two materials.
+    {"skin_depth",
+     [](FuzzInput& in) {
+         const double f = in.number();
+         require_finite(skin_depth(f, static_cast<Conductor>(in.below(2)), in.number()), "skin_depth");
+     }},
+    {"wire_rac_ratio",
+     [](FuzzInput& in) {
+         const double d = in.number(), f = in.number();
+         require_finite(wire_rac_ratio(d, f, static_cast<Conductor>(in.below(2)), in.number()), "wire_rac_ratio");
+     }},
+    {"dowell_factor", [](FuzzInput& in) { require_finite(dowell_factor(in.number(), in.number()), "dowell_factor"); }},
+    {"coil_rac_ratio",
+     [](FuzzInput& in) {
+         const double d = in.number(), w = in.number(), f = in.number(), m = in.number(), n = in.number();
+         require_finite(coil_rac_ratio(d, w, f, m, n, static_cast<Conductor>(in.below(2)), in.number()),
+                        "coil_rac_ratio");
+     }},
+    {"coil_self_capacitance",
+     [](FuzzInput& in) {
+         const double ri = in.number(), l = in.number(), n = in.number(), m = in.number(), dc = in.number(),
+                      d_o = in.number(), er = in.number();
+         require_finite(coil_self_capacitance(ri, l, n, m, dc, d_o, er), "coil_self_capacitance");
+     }},
+    {"coil_srf", [](FuzzInput& in) { require_finite(coil_srf(in.number(), in.number()), "coil_srf"); }},
+    {"coil_impedance",
+     [](FuzzInput& in) {
+         const double r = in.number(), l = in.number(), f = in.number(), c = in.number();
+         const Impedance z = coil_impedance(r, l, f, c);
+         require_finite(z.magnitude, "coil_impedance |Z|");
+         require_finite(z.phase, "coil_impedance phase");
+     }},
+    {"coil_voltage_ac",
+     [](FuzzInput& in) {
+         const double r = in.number(), l = in.number(), f = in.number(), i = in.number();
+         require_finite(coil_voltage_ac(r, l, f, i), "coil_voltage_ac");
+     }},
+    {"resonance",
+     [](FuzzInput& in) {
+         const double i = in.number(), l = in.number(), f = in.number();
+         require_finite(resonance_capacitance(l, f), "resonance_capacitance");
+         require_finite(resonance_cap_voltage(i, l, f), "resonance_cap_voltage");
+     }},
+    {"pickup",
+     [](FuzzInput& in) {
+         const double n = in.number(), a = in.number(), f = in.number(), b = in.number(), r = in.number(),
+                      l = in.number(), c = in.number(), t = in.number(), ea = in.number();
+         require_finite(pickup_emf(n, a, f, b), "pickup_emf");
+         require_finite(pickup_area(a, b, r, n), "pickup_area");
+         require_finite(pickup_sensitivity(n, a, f, r, l, c), "pickup_sensitivity");
+         require_finite(johnson_noise(r, t, b), "johnson_noise");
+         require_finite(pickup_nef(n, a, f, r, t, l, c, ea), "pickup_nef");
      }},
 };
 
