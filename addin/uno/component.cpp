@@ -6,6 +6,7 @@
 #include <com/sun/star/lang/XServiceInfo.hpp>
 #include <com/sun/star/lang/XServiceName.hpp>
 #include <com/sun/star/sheet/NoConvergenceException.hpp>
+#include <com/sun/star/table/XCellRange.hpp>
 #include <com/sun/star/uno/XComponentContext.hpp>
 #include <cppuhelper/implbase3.hxx>
 #include <cppuhelper/supportsservice.hxx>
@@ -14,6 +15,7 @@
 #include <uno/mapping.hxx>
 
 #include <exception>
+#include <stdexcept>
 
 #include "../core/evaluate.hpp"
 #include "../core/fixed_vector.hpp"
@@ -72,12 +74,19 @@ private:
 
         sheet::CallResult result;
         try {
+            const sheet::FunctionSpec& spec = sheet::function_specs()[index];
             sheet::FixedVector<sheet::Arg, sheet::kMaxArgs> converted;  // no function has more (checked by a test)
-            for (std::size_t i = 0; i < count; ++i) converted.push_back(to_arg(*args[i]));  // throws beyond
+            for (std::size_t i = 0; i < count; ++i)
+                converted.push_back(to_arg(*args[i], spec.args[i]));  // throws beyond kMaxArgs or a range's limits
             result = sheet::evaluate(index, {converted.data(), count});
+        } catch (const std::invalid_argument& e) {  // DomainError: a range refused before it was read
+            result = sheet::CallResult::failure(sheet::CellError::IllegalArgument, e.what());
         } catch (const std::exception& e) {
             // Nothing may escape into Calc but the exceptions it understands.
             result = sheet::CallResult::failure(sheet::CellError::NoValue, e.what());
+        } catch (const uno::Exception& e) {  // Calc's range object failed while being read
+            result = sheet::CallResult::failure(sheet::CellError::NoValue,
+                                                rtl::OUStringToOString(e.Message, RTL_TEXTENCODING_UTF8).getStr());
         }
         if (result.error == sheet::CellError::None) return to_any(result);
         const OUString message = OUString::fromUtf8(result.message.c_str());
