@@ -8,8 +8,8 @@ its own), and reports:
   first     seconds until the formula's first result (setFormula and reading the result,
             what a user waits for after typing it);
   recalc    median seconds of a hard recalculation (calculateAll) of that one formula;
-  peak MiB  how far soffice.bin's peak resident memory (VmHWM) rose above its size before
-            the formula was typed;
+  peak MiB  how far soffice.bin's peak resident memory (VmHWM, reset through
+            /proc/<pid>/clear_refs just before) rose above its size before the formula was typed;
   result    the cell's text or error, or "LibreOffice died".
 
 The reference is Calc's own =MULTINOMIAL over the same range (the issue's yardstick): a
@@ -49,20 +49,6 @@ HAZARDS = [
 ]
 
 
-def soffice_pid(session):
-    todo = [session.proc.pid]
-    while todo:
-        pid = todo.pop()
-        try:
-            if pathlib.Path(f"/proc/{pid}/comm").read_text().strip() == "soffice.bin":
-                return pid
-            for task in pathlib.Path(f"/proc/{pid}/task").iterdir():
-                todo += [int(c) for c in (task / "children").read_text().split()]
-        except OSError:
-            pass
-    return None
-
-
 def status_kib(pid, key):
     for line in pathlib.Path(f"/proc/{pid}/status").read_text().splitlines():
         if line.startswith(key + ":"):
@@ -85,7 +71,8 @@ def run_case(oxt, formula, repeat):
         bad = [list(r) for r in TABLE]
         bad[1][1] = 0.05  # outer radius below inner: a bad row on the second sheet
         sheet2.getCellRangeByName("K1:P2").setDataArray(tuple(tuple(r) for r in bad))
-        pid = soffice_pid(session)
+        pid = session.soffice_pid()
+        pathlib.Path(f"/proc/{pid}/clear_refs").write_text("5")  # VmHWM := VmRSS
         base = status_kib(pid, "VmRSS")
         cell = sheet.getCellByPosition(7, 5)  # H6: outside every range above
         start = time.perf_counter()

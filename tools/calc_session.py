@@ -64,6 +64,20 @@ class CalcSession:
         except Exception:
             return False
 
+    def soffice_pid(self):
+        """The soffice.bin process under the launcher (the launcher may be it), or None."""
+        todo = [self.proc.pid]
+        while todo:
+            pid = todo.pop()
+            try:
+                if pathlib.Path(f"/proc/{pid}/comm").read_text().strip() == "soffice.bin":
+                    return pid
+                for task in pathlib.Path(f"/proc/{pid}/task").iterdir():
+                    todo += [int(c) for c in (task / "children").read_text().split()]
+            except OSError:
+                pass
+        return None
+
     def new_document(self):
         return self.desktop.loadComponentFromURL("private:factory/scalc", "_blank", 0, props(Hidden=True))
 

@@ -20,8 +20,6 @@ using css::uno::Any;
 using css::uno::Sequence;
 using namespace css::uno;  // TypeClass_* enumerators
 
-namespace {
-
 sheet::Cell to_cell(const Any& v) {
     switch (v.getValueTypeClass()) {
         case TypeClass_VOID:
@@ -45,8 +43,6 @@ sheet::Cell to_cell(const Any& v) {
         }
     }
 }
-
-}  // namespace
 
 sheet::Arg from_rows(const Sequence<Sequence<Any>>& view, const sheet::ArgSpec& spec) {
     const std::size_t rows = static_cast<std::size_t>(view.getLength());

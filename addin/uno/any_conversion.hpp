@@ -18,6 +18,9 @@ namespace coilwright::uno_glue {
 // limits (core/range_limits.hpp) before any cell is copied; throws DomainError beyond them.
 sheet::Arg to_arg(const css::uno::Any& value, const sheet::ArgSpec& spec);
 
+// One value as Calc passes it: void (blank), double (or another number type), string.
+sheet::Cell to_cell(const css::uno::Any& value);
+
 // Rows of cells as Calc passes them (or as a cell range's data array gives them), for `spec`.
 sheet::Arg from_rows(const css::uno::Sequence<css::uno::Sequence<css::uno::Any>>& rows, const sheet::ArgSpec& spec);
 

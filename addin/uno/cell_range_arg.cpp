@@ -71,15 +71,20 @@ sheet::Arg read_cell_range(const uno::Reference<css::table::XCellRange>& range, 
     const css::table::CellRangeAddress address = addressable->getRangeAddress();
     if (spans_several_sheets(range)) sheet::refuse_several_sheets(spec);
     const std::size_t cols = static_cast<std::size_t>(address.EndColumn - address.StartColumn + 1);
-    if (sheet::plan_range(spec, 0, cols) == sheet::RangePlan::WidthOnly) return sheet::Arg::array(0, cols, {});
-    const std::size_t rows = rows_to_last_filled(range, address.StartRow);
-    sheet::plan_range(spec, rows, cols);  // throws beyond the limits, before any cell is read
+    const bool one_cell = cols == 1 && address.StartRow == address.EndRow;
+    if (!one_cell && sheet::plan_range(spec, 0, cols) == sheet::RangePlan::WidthOnly)
+        return sheet::Arg::array(0, cols, {});
+    const std::size_t rows = one_cell ? 1 : rows_to_last_filled(range, address.StartRow);
+    sheet::plan_range(spec, one_cell ? 0 : rows, cols);  // throws beyond the limits, before any cell is read
     if (rows == 0) return sheet::Arg::array(0, cols, {});
     const uno::Reference<css::table::XCellRange> block =
         range->getCellRangeByPosition(0, 0, static_cast<sal_Int32>(cols - 1), static_cast<sal_Int32>(rows - 1));
     refuse_error_values(block, spec);
     uno::Reference<css::sheet::XCellRangeData> data(block, uno::UNO_QUERY_THROW);
-    return from_rows(data->getDataArray(), spec);
+    const uno::Sequence<uno::Sequence<uno::Any>> cells = data->getDataArray();
+    // One cell is one value, as Calc passes a single cell to an `any` parameter.
+    if (one_cell && cells.getLength() == 1 && cells[0].getLength() == 1) return sheet::Arg::scalar(to_cell(cells[0][0]));
+    return from_rows(cells, spec);
 }
 
 }  // namespace coilwright::uno_glue
