@@ -27,9 +27,10 @@ def props(**kw):
 
 
 class CalcSession:
-    def __init__(self, oxt=None, keep_dir=False, timeout=60):
-        self.dir = pathlib.Path(tempfile.mkdtemp(prefix="coilwright-lo-"))
-        self.keep_dir = keep_dir
+    def __init__(self, oxt=None, keep_dir=False, timeout=60, directory=None):
+        # directory: use (and keep) the profile and shared-extension cache already in it.
+        self.dir = pathlib.Path(directory) if directory else pathlib.Path(tempfile.mkdtemp(prefix="coilwright-lo-"))
+        self.keep_dir = keep_dir or directory is not None
         self.env = [f"-env:UserInstallation=file://{self.dir}/profile",
                     f"-env:UNO_SHARED_PACKAGES_CACHE=file://{self.dir}/shared"]
         if oxt:
