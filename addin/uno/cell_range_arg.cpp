@@ -1,6 +1,7 @@
 #include "cell_range_arg.hpp"
 
 #include <com/sun/star/beans/XPropertySet.hpp>
+#include <com/sun/star/beans/XPropertySetInfo.hpp>
 #include <com/sun/star/sheet/CellFlags.hpp>
 #include <com/sun/star/sheet/FormulaResult.hpp>
 #include <com/sun/star/sheet/XCellRangeAddressable.hpp>
@@ -29,9 +30,13 @@ namespace {
 // that tells. A sheet name cannot contain ':' (Calc refuses it), so what follows the last ':'
 // names a sheet exactly when it holds a '.'.
 bool spans_several_sheets(const uno::Reference<css::table::XCellRange>& range) {
+    static const rtl::OUString kName("AbsoluteName");
     uno::Reference<css::beans::XPropertySet> properties(range, uno::UNO_QUERY_THROW);
+    // Asked first so that Calc throws nothing into the add-in (component.cpp says why).
+    const uno::Reference<css::beans::XPropertySetInfo> info = properties->getPropertySetInfo();
+    if (!info.is() || !info->hasPropertyByName(kName)) return true;  // cannot tell: refused
     rtl::OUString name;
-    properties->getPropertyValue("AbsoluteName") >>= name;
+    properties->getPropertyValue(kName) >>= name;
     const sal_Int32 colon = name.lastIndexOf(':');
     return colon >= 0 && name.indexOf('.', colon) >= 0;
 }
