@@ -12,6 +12,10 @@ its own), and reports:
             /proc/<pid>/clear_refs just before) rose above its size before the formula was typed;
   result    the cell's text or error, or "LibreOffice died".
 
+A last case times what passing a table by reference costs where tables are small and cells
+many: 10,000 cells =STACK_BZ($K$1:$P$2;A1) (a two-row table, z down column A) against 10,000
+cells =LOOP_BZ(...) of the same field (median recalculation, microseconds per cell).
+
 The reference is Calc's own =MULTINOMIAL over the same range (the issue's yardstick): a
 wrong-width table range must answer within 1.5 times its time. LibreOffice runs under an
 address-space limit (--memory-limit-gb, default 8) so that a case that would take all the
@@ -98,6 +102,34 @@ def run_case(oxt, formula, repeat):
         session.close()
 
 
+def run_many(oxt, repeat, n=10_000):
+    """Microseconds per cell of n cells of a small-table formula and of a plain one."""
+    from com.sun.star.sheet.FillDirection import TO_BOTTOM
+    session = CalcSession(oxt)
+    try:
+        out = {}
+        for label, formula in (("STACK_BZ($K$1:$P$2;A1)", "=STACK_BZ($K$1:$P$2;A1)"),
+                               ("LOOP_BZ(0.1;20;1;A1)", "=LOOP_BZ(0.1;20;1;A1)")):
+            doc = session.new_document()
+            sheet = doc.Sheets.getByIndex(0)
+            sheet.getCellRangeByName("K1:P2").setDataArray(tuple(tuple(r) for r in TABLE))
+            sheet.getCellRangeByPosition(0, 0, 0, n - 1).setDataArray(tuple((0.3 + 1e-5 * i,) for i in range(n)))
+            sheet.getCellByPosition(1, 0).setFormula(formula)
+            sheet.getCellRangeByPosition(1, 0, 1, n - 1).fillAuto(TO_BOTTOM, 1)
+            doc.calculateAll()
+            times = []
+            for _ in range(repeat):
+                t0 = time.perf_counter()
+                doc.calculateAll()
+                times.append(time.perf_counter() - t0)
+            bad = sum(1 for (v,) in sheet.getCellRangeByPosition(1, 0, 1, n - 1).getDataArray() if not isinstance(v, float))
+            out[label] = (statistics.median(times) / n * 1e6, bad)
+            doc.close(True)
+        return out
+    finally:
+        session.close()
+
+
 def main():
     ap = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
     ap.add_argument("--oxt", default=str(ROOT / "build" / "coilwright.oxt"))
@@ -117,6 +149,8 @@ def main():
         r = run_case(opts.oxt, formula, opts.repeat)
         results[formula] = r
         print(f"{label:48} {r['first']:8.3f} {r['recalc']:9.3f} {r['peak']:9.0f}  {r['result'][:60]}", flush=True)
+    for label, (us, bad) in run_many(opts.oxt, opts.repeat).items():
+        print(f"10,000 cells ={label:35} {us:8.2f} us per cell" + (f"  ({bad} not numbers)" if bad else ""))
     ref, check = results["=MULTINOMIAL(K:AD)"], results["=STACK_CHECK(K:AD)"]
     if ref["recalc"] == ref["recalc"] and check["recalc"] == check["recalc"]:
         print(f"wrong-width table range / MULTINOMIAL over K:AD: first {check['first'] / ref['first']:.2f}, "
