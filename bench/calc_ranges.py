@@ -14,7 +14,8 @@ its own), and reports:
 
 A last case times what passing a table by reference costs where tables are small and cells
 many: 10,000 cells =STACK_BZ($K$1:$P$2;A1) (a two-row table, z down column A) against 10,000
-cells =LOOP_BZ(...) of the same field (median recalculation, microseconds per cell).
+cells =LOOP_BZ(...) of the same field (median recalculation, microseconds per cell, wall clock
+and LibreOffice's processor time, which a busy machine disturbs less).
 
 The reference is Calc's own =MULTINOMIAL over the same range (the issue's yardstick): a
 wrong-width table range must answer within 1.5 times its time. LibreOffice runs under an
@@ -102,6 +103,17 @@ def run_case(oxt, formula, repeat):
         session.close()
 
 
+def cpu_seconds(pid):
+    """Processor time of every thread of a process (from /proc/<pid>/task/*/schedstat)."""
+    total = 0
+    for task in pathlib.Path(f"/proc/{pid}/task").iterdir():
+        try:
+            total += int((task / "schedstat").read_text().split()[0])
+        except OSError:
+            pass  # a thread that just ended
+    return total * 1e-9
+
+
 def run_many(oxt, repeat, n=10_000):
     """Microseconds per cell of n cells of a small-table formula and of a plain one."""
     from com.sun.star.sheet.FillDirection import TO_BOTTOM
@@ -117,13 +129,15 @@ def run_many(oxt, repeat, n=10_000):
             sheet.getCellByPosition(1, 0).setFormula(formula)
             sheet.getCellRangeByPosition(1, 0, 1, n - 1).fillAuto(TO_BOTTOM, 1)
             doc.calculateAll()
-            times = []
+            pid = session.soffice_pid()
+            times, cpu = [], []
             for _ in range(repeat):
-                t0 = time.perf_counter()
+                c0, t0 = cpu_seconds(pid), time.perf_counter()
                 doc.calculateAll()
                 times.append(time.perf_counter() - t0)
+                cpu.append(cpu_seconds(pid) - c0)
             bad = sum(1 for (v,) in sheet.getCellRangeByPosition(1, 0, 1, n - 1).getDataArray() if not isinstance(v, float))
-            out[label] = (statistics.median(times) / n * 1e6, bad)
+            out[label] = (statistics.median(times) / n * 1e6, statistics.median(cpu) / n * 1e6, bad)
             doc.close(True)
         return out
     finally:
@@ -149,8 +163,9 @@ def main():
         r = run_case(opts.oxt, formula, opts.repeat)
         results[formula] = r
         print(f"{label:48} {r['first']:8.3f} {r['recalc']:9.3f} {r['peak']:9.0f}  {r['result'][:60]}", flush=True)
-    for label, (us, bad) in run_many(opts.oxt, opts.repeat).items():
-        print(f"10,000 cells ={label:35} {us:8.2f} us per cell" + (f"  ({bad} not numbers)" if bad else ""))
+    for label, (us, cpu, bad) in run_many(opts.oxt, opts.repeat).items():
+        print(f"10,000 cells ={label:25} {us:8.2f} us per cell, {cpu:6.2f} us processor time"
+              + (f"  ({bad} not numbers)" if bad else ""))
     ref, check = results["=MULTINOMIAL(K:AD)"], results["=STACK_CHECK(K:AD)"]
     if ref["recalc"] == ref["recalc"] and check["recalc"] == check["recalc"]:
         print(f"wrong-width table range / MULTINOMIAL over K:AD: first {check['first'] / ref['first']:.2f}, "
