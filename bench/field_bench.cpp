@@ -25,11 +25,7 @@
 #include <time.h>
 #include <vector>
 
-#include "coilwright/coil_stack.hpp"
-#include "coilwright/loop.hpp"
-#include "coilwright/loop_batch.hpp"
-#include "coilwright/solenoid.hpp"
-#include "coilwright/thick_coil.hpp"
+#include "coilwright/field.hpp"
 
 namespace {
 
@@ -107,7 +103,7 @@ void thick_offaxis(const Points& p, Output& o) {
 }
 
 void stack3_mixed(const Points& p, Output& o) {
-    per_point(p, o, [](double z, double r) { return stack_field(kMixed, z, r); });
+    per_point(p, o, [](double z, double r) { return table_field(kMixed, z, r); });
 }
 
 // Reference: Boost.Math's complete elliptic integrals K(k) and E(k), one scalar call each.

@@ -81,7 +81,8 @@ class Sheet:
         addr = uno.createUnoStruct("com.sun.star.table.CellAddress")
         addr.Sheet, addr.Column, addr.Row = self.book.index_of(self.name), col, row
         absolute = ":".join("$" + re.sub(r"([A-Z]+)(\d+)", r"\1$\2", part) for part in cell.split(":"))
-        self.book.doc.NamedRanges.addNewByName(name, f"${self.name}.{absolute}", addr, 0)
+        sheet = self.name if re.fullmatch(r"[A-Za-z_]\w*", self.name) else "'" + self.name.replace("'", "''") + "'"
+        self.book.doc.NamedRanges.addNewByName(name, f"${sheet}.{absolute}", addr, 0)
 
     def input(self, row, label, name, number, unit, note="", fmt="0.000"):
         """Label | value (named, yellow) | unit | note."""

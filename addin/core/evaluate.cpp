@@ -9,7 +9,7 @@
 #include <vector>
 
 #include "catalogue.hpp"
-#include "coilwright/errors.hpp"
+#include "error_route.hpp"
 #include "coilwright/wire.hpp"
 #include "fixed_vector.hpp"
 #include "registry.hpp"
@@ -91,25 +91,17 @@ bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& 
 
 ElementOutcome run(const ElementFn& fn, const double* numbers) {
     ElementOutcome out;
-    try {
-        out.value = fn(numbers);
-        if (!std::isfinite(out.value)) {
-            out.error = CellError::IllegalArgument;
-            out.message = "the result is not a finite number";
-        } else if (is_subnormal(out.value)) {
-            // Underflow into the subnormal range loses relative precision: an error, like overflow.
-            out.error = CellError::IllegalArgument;
-            out.message = "the result underflows (magnitude below 2.2e-308)";
-        }
-    } catch (const ConvergenceError& e) {
-        out.error = CellError::NoConvergence;
-        out.message = e.what();
-    } catch (const std::invalid_argument& e) {  // DomainError, SingularPointError
+    CellFailure failure;
+    if (!run_guarded([&] { out.value = fn(numbers); }, failure)) {
+        out.error = failure.error;
+        out.message = std::move(failure.message);
+    } else if (!std::isfinite(out.value)) {
         out.error = CellError::IllegalArgument;
-        out.message = e.what();
-    } catch (const std::exception& e) {
-        out.error = CellError::NoValue;
-        out.message = e.what();
+        out.message = "the result is not a finite number";
+    } else if (is_subnormal(out.value)) {
+        // Underflow into the subnormal range loses relative precision: an error, like overflow.
+        out.error = CellError::IllegalArgument;
+        out.message = "the result underflows (magnitude below 2.2e-308)";
     }
     return out;
 }
@@ -181,20 +173,12 @@ std::string shape_text(std::size_t rows, std::size_t cols) {
     return std::to_string(rows) + "x" + std::to_string(cols);
 }
 
-// Runs `work`; an engine error it throws becomes the whole call's failure (the same mapping as
-// for single elements in run()).
+// Runs `work`; an error it throws becomes the whole call's failure (error_route.hpp).
 template <class F>
 std::optional<CallResult> guarded(F&& work) {
-    try {
-        work();
-        return std::nullopt;
-    } catch (const ConvergenceError& e) {
-        return CallResult::failure(CellError::NoConvergence, e.what());
-    } catch (const std::invalid_argument& e) {  // DomainError, SingularPointError
-        return CallResult::failure(CellError::IllegalArgument, e.what());
-    } catch (const std::exception& e) {
-        return CallResult::failure(CellError::NoValue, e.what());
-    }
+    CellFailure failure;
+    if (run_guarded(std::forward<F>(work), failure)) return std::nullopt;
+    return CallResult::failure(failure.error, std::move(failure.message));
 }
 
 // A function that returns its own shape (Prepared::shaped): numeric arguments are single values.

@@ -6,7 +6,7 @@
 #include <span>
 
 #include "coil_table_arg.hpp"
-#include "coilwright/coil_stack.hpp"
+#include "coilwright/field.hpp"
 #include "registry.hpp"
 
 namespace coilwright::sheet {

@@ -1,5 +1,5 @@
 // PAIR_COILS, GRADPAIR_COILS, MAXWELL_COILS: coil tables of the classic arrangements.
-#include "coilwright/pairs.hpp"
+#include "coilwright/design.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

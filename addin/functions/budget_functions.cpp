@@ -1,5 +1,5 @@
 // COIL_* budget functions and INSULATION_*: resistance, power, temperature, class, energy.
-#include "coilwright/budget.hpp"
+#include "coilwright/wire.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

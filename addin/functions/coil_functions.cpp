@@ -1,5 +1,5 @@
 // COIL_* : thick winding of rectangular cross-section, uniform current density.
-#include "coilwright/thick_coil.hpp"
+#include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

@@ -1,10 +1,8 @@
 // LOOP_FZ, COIL_FZ, STACK_FZ, SOLENOID_PRESSURE.
 #include "../core/coil_table_arg.hpp"
+#include "../core/matrix_result.hpp"
 #include "../core/registry.hpp"
-#include "coilwright/checks.hpp"
-#include "coilwright/mutual_inductance.hpp"
-#include "coilwright/self_inductance.hpp"
-#include "coilwright/stack_inductance.hpp"
+#include "coilwright/inductance.hpp"
 
 namespace coilwright::sheet {
 
@@ -13,50 +11,25 @@ namespace {
 constexpr double kLoopCost = 1.0;
 constexpr double kWindingCost = 5e4;
 
-// N1 N2 I1 I2, checking each factor.
-double ampere_turn_product(double n1, double i1, double n2, double i2) {
-    check::non_negative(n1, "turns 1");
-    check::finite(i1, "current 1");
-    check::non_negative(n2, "turns 2");
-    check::finite(i2, "current 2");
-    return (n1 * i1) * (n2 * i2);
-}
-
 }  // namespace
 
 std::vector<Implementation> force_functions() {
     // Argument orders as in idl/functions/95_force.toml.
     return {
         numeric("LOOP_FZ",
-                [](const double* a) {
-                    const double scale = ampere_turn_product(a[1], a[2], a[4], a[5]);
-                    const double slope = loop_mutual_inductance_slope(a[0], a[3], a[6]);
-                    return check::finite_result(scale * slope, "the force");
-                },
+                [](const double* a) { return loop_axial_force(a[0], a[1], a[2], a[3], a[4], a[5], a[6]); },
                 kLoopCost),
         numeric("COIL_FZ",
                 [](const double* a) {
-                    const double scale = ampere_turn_product(a[3], a[4], a[8], a[9]);
-                    const double slope = winding_mutual_inductance_slope({a[0], a[1], a[2]}, {a[5], a[6], a[7]}, a[10]);
-                    return check::finite_result(scale * slope, "the force");
+                    return coil_axial_force({a[0], a[1], a[2]}, a[3], a[4], {a[5], a[6], a[7]}, a[8], a[9], a[10]);
                 },
                 kWindingCost),
         {"STACK_FZ",
          [](std::span<const Arg* const> tables) {
              const CoilTable table = read_coil_table(*tables[0]);
              Prepared p;
-             p.cost = stack_work_estimate(table);
-             p.shaped = [table](const double*) {
-                 const MatrixWithProblems f = axial_forces(table);
-                 CallResult r;
-                 r.rows = static_cast<std::size_t>(f.values.rows());
-                 r.cols = 1;
-                 r.values.assign(f.values.data(), f.values.data() + r.rows);
-                 r.errors.assign(r.rows, CellError::None);
-                 for (std::size_t i = 0; i < r.rows; ++i)
-                     if (!f.problems[i].empty()) r.errors[i] = CellError::IllegalArgument;
-                 return r;
-             };
+             p.cost = table_work_estimate(table);
+             p.shaped = [table](const double*) { return matrix_call_result(axial_forces(table)); };
              return p;
          }},
         numeric("SOLENOID_PRESSURE",

@@ -4,8 +4,7 @@
 #include <cstring>
 
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
-#include "coilwright/loop_batch.hpp"
+#include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

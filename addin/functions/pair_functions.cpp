@@ -1,5 +1,5 @@
 // HELMHOLTZ_B0, PAIR_*, GRADPAIR_*: pairs of identical coaxial coils.
-#include "coilwright/pairs.hpp"
+#include "coilwright/design.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

@@ -1,5 +1,6 @@
 // RECT_* and RECTPAIR_*: rectangular loops and pairs of them.
-#include "coilwright/rect.hpp"
+#include "coilwright/field.hpp"
+#include "coilwright/design.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

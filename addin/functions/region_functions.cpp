@@ -1,6 +1,6 @@
 // STACK_DBZDZ, STACK_UNIFORM_R, STACK_UNIFORM_SPHERE, STACK_SCALE_FOR_BZ, STACK_SCALE_FOR_GRADIENT.
-#include "coilwright/coil_stack.hpp"
-#include "coilwright/regions.hpp"
+#include "coilwright/field.hpp"
+#include "coilwright/design.hpp"
 #include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {
@@ -17,7 +17,7 @@ Implementation on_table(const char* name, F per_element, double evaluations) {
 
 std::vector<Implementation> region_functions() {
     return {
-        on_table("STACK_DBZDZ", [](const CoilTable& t, const double* a) { return stack_gradient(t, a[0], a[1]); }, 4),
+        on_table("STACK_DBZDZ", [](const CoilTable& t, const double* a) { return table_gradient(t, a[0], a[1]); }, 4),
         on_table("STACK_UNIFORM_R",
                  [](const CoilTable& t, const double* a) { return radial_uniform_extent(t, a[0], a[1]); }, 3000),
         on_table("STACK_UNIFORM_SPHERE",

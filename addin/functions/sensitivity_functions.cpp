@@ -3,7 +3,7 @@
 #include <string>
 
 #include "coilwright/errors.hpp"
-#include "coilwright/sensitivity.hpp"
+#include "coilwright/design.hpp"
 #include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {

@@ -1,5 +1,5 @@
 // SOLENOID_* : thin current-sheet solenoid.
-#include "coilwright/solenoid.hpp"
+#include "coilwright/field.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

@@ -1,9 +1,9 @@
 // STACK_DNBZ, STACK_UNIFORM_Z, STACK_LINEAR_Z: the axis of a coil table.
 #include <cmath>
 
-#include "coilwright/axial.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/uniformity.hpp"
+#include "coilwright/design.hpp"
 #include "../core/table_binding.hpp"
 
 namespace coilwright::sheet {

@@ -1,7 +1,7 @@
 // STACK_* : a table of coaxial coils, read once per call.
 #include <string>
 
-#include "coilwright/coil_stack.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/errors.hpp"
 #include "../core/coil_table_arg.hpp"
 #include "../core/table_binding.hpp"
@@ -13,7 +13,7 @@ namespace {
 // The sum of the rows' fields at (z, r), the arguments after the table (idl/functions/40_stack.toml).
 Implementation stack_component(const char* name, double (*pick)(const FieldRZ&)) {
     return on_coil_table(
-        name, [pick](const CoilTable& t, const double* a) { return pick(stack_field(t, a[0], a[1])); },
+        name, [pick](const CoilTable& t, const double* a) { return pick(table_field(t, a[0], a[1])); },
         field_point_cost);
 }
 

@@ -1,5 +1,5 @@
 // WINDING_*: layer windings of round wire in a rectangular winding window.
-#include "coilwright/winding.hpp"
+#include "coilwright/wire.hpp"
 #include "../core/registry.hpp"
 
 namespace coilwright::sheet {

@@ -1,5 +1,4 @@
 // AWG_DIAMETER and WIRE_*: round wire sizes, materials, resistance and mass.
-#include "coilwright/conductor.hpp"
 #include "coilwright/wire.hpp"
 #include "../core/registry.hpp"
 

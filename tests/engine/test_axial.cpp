@@ -5,10 +5,9 @@
 #include <cmath>
 #include <cstdio>
 
-#include "coilwright/axial.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

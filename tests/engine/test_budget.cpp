@@ -3,7 +3,7 @@
 
 #include <cmath>
 
-#include "coilwright/budget.hpp"
+#include "coilwright/wire.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 

@@ -7,9 +7,9 @@
 #include <boost/math/special_functions/ellint_3.hpp>
 #include <cmath>
 
-#include "coilwright/bulirsch_cel.hpp"
+#include "numerics/bulirsch_cel.hpp"
 
-using coilwright::cel;
+using coilwright::internal::cel;
 
 namespace {
 double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }

@@ -8,8 +8,7 @@
 #include <cmath>
 #include <cstdio>
 
-#include "coilwright/flat_spiral.hpp"
-#include "coilwright/thick_coil.hpp"
+#include "coilwright/field.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

@@ -5,9 +5,8 @@
 #include <cstdio>
 #include <utility>
 
-#include "coilwright/conductor.hpp"
-#include "coilwright/errors.hpp"
 #include "coilwright/wire.hpp"
+#include "coilwright/errors.hpp"
 
 using namespace coilwright;
 

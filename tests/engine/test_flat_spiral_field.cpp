@@ -7,8 +7,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/flat_spiral.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 
 using namespace coilwright;
 

@@ -10,11 +10,10 @@
 #include <vector>
 
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
-#include "coilwright/loop_batch.hpp"
+#include "coilwright/field.hpp"
 
 using namespace coilwright;
-using detail::BatchCode;
+using internal::BatchCode;
 
 namespace {
 
@@ -67,7 +66,7 @@ Points hard_and_random_points(double a) {
 
 std::vector<BatchCode> codes() {
     std::vector<BatchCode> out{BatchCode::Baseline};
-    if (detail::best_batch_code() == BatchCode::Avx2) out.push_back(BatchCode::Avx2);
+    if (internal::best_batch_code() == BatchCode::Avx2) out.push_back(BatchCode::Avx2);
     return out;
 }
 
@@ -83,7 +82,7 @@ TEST(LoopBatch, EqualsLoopFieldBitForBitOrIsNaNWhereItThrows) {
         for (BatchCode code : codes()) {
             std::vector<double> bz(n), br(n);
             const std::size_t failed =
-                detail::loop_field_batch_using(code, loop, 0.0, p.z.data(), p.r.data(), n, bz.data(), br.data(), false);
+                internal::loop_field_batch_using(code, loop, 0.0, p.z.data(), p.r.data(), n, bz.data(), br.data(), false);
             std::size_t throws = 0;
             for (std::size_t i = 0; i < n; ++i) {
                 try {
@@ -107,7 +106,7 @@ TEST(LoopBatch, TheDefaultEntryPointsUseTheSameCode) {
     const std::size_t n = p.z.size();
     std::vector<double> bz(n), br(n), bz_ref(n), br_ref(n);
     loop_field_batch(loop, p.z.data(), p.r.data(), n, bz.data(), br.data());
-    detail::loop_field_batch_using(BatchCode::Baseline, loop, 0.0, p.z.data(), p.r.data(), n, bz_ref.data(),
+    internal::loop_field_batch_using(BatchCode::Baseline, loop, 0.0, p.z.data(), p.r.data(), n, bz_ref.data(),
                                    br_ref.data(), false);
     for (std::size_t i = 0; i < n; ++i) {
         EXPECT_EQ(bits(bz[i]), bits(bz_ref[i]));
@@ -123,7 +122,7 @@ TEST(LoopBatch, AddingLoopsIsTheSumOfMovedLoops) {
     for (BatchCode code : codes()) {
         std::vector<double> bz(n, 0.0), br(n, 0.0);
         for (double centre : {-0.15, 0.15})
-            detail::loop_field_batch_using(code, loop, centre, p.z.data(), p.r.data(), n, bz.data(), br.data(), true);
+            internal::loop_field_batch_using(code, loop, centre, p.z.data(), p.r.data(), n, bz.data(), br.data(), true);
         for (std::size_t i = 0; i < n; ++i) {
             try {
                 const FieldRZ lower = loop_field(loop, p.z[i] + 0.15, p.r[i]);

@@ -5,11 +5,12 @@
 #include <cmath>
 #include <limits>
 
-#include "coilwright/bulirsch_cel.hpp"
+#include "numerics/bulirsch_cel.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 
 using namespace coilwright;
+using coilwright::internal::cel;
 
 TEST(LoopExtremes, PointWhoseDistanceFromTheWireUnderflowsIsSingularNotAHang) {
     // alpha / beta = (1e-300 / 2e23) / 2 rounds to 0: the Gauss iteration used to spin forever,

@@ -8,7 +8,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 
 using namespace coilwright;
 

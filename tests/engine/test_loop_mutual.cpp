@@ -7,8 +7,8 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
-#include "coilwright/mutual_inductance.hpp"
+#include "coilwright/field.hpp"
+#include "coilwright/inductance.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

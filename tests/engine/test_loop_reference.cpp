@@ -6,7 +6,7 @@
 #include <cmath>
 #include <cstdio>
 
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

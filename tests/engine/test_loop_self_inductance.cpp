@@ -7,7 +7,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/self_inductance.hpp"
+#include "coilwright/inductance.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

@@ -3,12 +3,10 @@
 
 #include <cmath>
 
-#include "coilwright/axial.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
-#include "coilwright/pairs.hpp"
-#include "coilwright/uniformity.hpp"
+#include "coilwright/design.hpp"
 
 using namespace coilwright;
 
@@ -37,7 +35,7 @@ TEST(Pairs, HelmholtzCentreFieldAndVanishingSecondDerivative) {
 }
 
 TEST(Pairs, ThickPairSpacingZeroesTheSecondDerivative) {
-    const CoilShape coil{0.2, 0.24, 0.03};
+    const CoilSection coil{0.2, 0.24, 0.03};
     const double s = flat_pair_spacing(coil);
     const CoilTable pair({{0.2, 0.24, 0.03, -s / 2, 1, 1}, {0.2, 0.24, 0.03, s / 2, 1, 1}});
     const auto d = axial_derivatives(pair, 0.0, 2);
@@ -122,7 +120,7 @@ TEST(Uniformity, BadTolerancesAndZeroFieldsAreErrors) {
 TEST(Pairs, ReadyMadeTablesHaveTheirDefiningProperties) {
     // Helmholtz and gradient tables from their spacings; Maxwell's table zeroes the 2nd and 4th
     // derivatives (Maxwell, Treatise, art. 715, quoted from memory and confirmed here).
-    const CoilShape loop{0.2, 0.2, 0};
+    const CoilSection loop{0.2, 0.2, 0};
     const CoilTable h = flat_pair_table(loop, 10, 2);
     EXPECT_LT(rel(h.rows()[1].centre_z - h.rows()[0].centre_z, 0.2), 1e-14);
     EXPECT_LT(rel(axial_field(h, 0), std::pow(0.8, 1.5) * kMu0 * 10 * 2 / 0.2), 1e-14);

@@ -7,7 +7,8 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/rect.hpp"
+#include "coilwright/field.hpp"
+#include "coilwright/design.hpp"
 
 using namespace coilwright;
 using Eigen::Vector3d;
@@ -80,7 +81,7 @@ TEST(RectField, ClosedFormMeetsThePointDipoleWhereItTakesOver) {
     for (double ratio : {1.0, 0.3, 1e-3})
         for (Vector3d n : {Vector3d(1, 0, 0), Vector3d(0, 0, 1), Vector3d(0.6, 0.48, 0.64)}) {
             const double a = 1 / std::hypot(1.0, ratio), b = ratio * a, R = 0.99e30;
-            const Vector3d closed = detail::rect_field_scaled(a, b, R * n);
+            const Vector3d closed = internal::rect_field_scaled(a, b, R * n);
             const Vector3d dip = 4 * a * b * (3 * n.z() * n - Vector3d(0, 0, 1)) / (R * R * R);
             for (int k = 0; k < 3; ++k)
                 EXPECT_NEAR(closed[k], dip[k], 4e-15 * dip.norm()) << ratio << " " << n.transpose();

@@ -7,7 +7,8 @@
 #include <cmath>
 #include <cstdio>
 
-#include "coilwright/rect.hpp"
+#include "coilwright/field.hpp"
+#include "coilwright/design.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;

@@ -4,12 +4,10 @@
 
 #include <cmath>
 
-#include "coilwright/axial.hpp"
-#include "coilwright/coil_stack.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/regions.hpp"
-#include "coilwright/uniformity.hpp"
+#include "coilwright/design.hpp"
 
 using namespace coilwright;
 
@@ -34,10 +32,10 @@ TEST(Regions, GradientOffTheAxisAgreesWithTheOffAxisExpansion) {
                     if (n > 0) term_scale *= -(r / 2) * (r / 2) / (n * n);
                     series += term_scale * d[static_cast<std::size_t>(2 * n + 1)];
                 }
-                EXPECT_LT(rel(stack_gradient(*table, z, r), series), 1e-8) << z << " " << r;
+                EXPECT_LT(rel(table_gradient(*table, z, r), series), 1e-8) << z << " " << r;
             }
     // On the axis the gradient is the exact first derivative.
-    EXPECT_EQ(stack_gradient(kThickPair, 0.05, 0.0), axial_derivatives(kThickPair, 0.05, 1)[1]);
+    EXPECT_EQ(table_gradient(kThickPair, 0.05, 0.0), axial_derivatives(kThickPair, 0.05, 1)[1]);
 }
 
 TEST(Regions, RadialExtentMatchesADirectBisection) {
@@ -46,7 +44,7 @@ TEST(Regions, RadialExtentMatchesADirectBisection) {
         double lo = 0, hi = 0.9 * R;  // the deviation grows monotonically out to near the wire here
         for (int i = 0; i < 200; ++i) {
             const double mid = (lo + hi) / 2;
-            (std::fabs(stack_field(kHelmholtz, 0.0, mid).magnitude() / b0 - 1) > tol ? hi : lo) = mid;
+            (std::fabs(table_field(kHelmholtz, 0.0, mid).magnitude() / b0 - 1) > tol ? hi : lo) = mid;
         }
         EXPECT_LT(rel(radial_uniform_extent(kHelmholtz, tol, 0.0), lo), 1e-9) << tol;
     }
@@ -63,7 +61,7 @@ TEST(Regions, SphereIsWithinTheAxialAndRadialExtentsAndMeetsItsDefinition) {
         double w = 0;
         for (int i = 0; i <= 720; ++i) {
             const double t = kPi * i / 720;
-            w = std::max(w, std::fabs(stack_field(kThickPair, radius * std::cos(t), radius * std::sin(t)).magnitude() / b0 - 1));
+            w = std::max(w, std::fabs(table_field(kThickPair, radius * std::cos(t), radius * std::sin(t)).magnitude() / b0 - 1));
         }
         return w;
     };
@@ -76,7 +74,7 @@ TEST(Regions, ScaleForATargetFieldAndGradient) {
     const double k = scale_for_field(kThickPair, target, 0.01, 0.02);
     std::vector<CoilRow> rows = kThickPair.rows();
     for (auto& row : rows) row.current *= k;
-    EXPECT_LT(rel(stack_field(CoilTable(rows), 0.01, 0.02).bz, target), 1e-14);
+    EXPECT_LT(rel(table_field(CoilTable(rows), 0.01, 0.02).bz, target), 1e-14);
     const CoilTable opposed({{0.1, 0.1, 0, -0.0866, 10, -1}, {0.1, 0.1, 0, 0.0866, 10, 1}});
     const double kg = scale_for_gradient(opposed, 0.5, 0.0, 0.0);
     EXPECT_LT(rel(kg * axial_derivatives(opposed, 0.0, 1)[1], 0.5), 1e-14);
@@ -86,6 +84,6 @@ TEST(Regions, ScaleForATargetFieldAndGradient) {
 TEST(Regions, BadInputsAreErrors) {
     EXPECT_THROW(radial_uniform_extent(kHelmholtz, 0.0, 0.0), DomainError);
     EXPECT_THROW(spherical_uniform_radius(kHelmholtz, 1.5, 0.0), DomainError);
-    EXPECT_THROW(stack_gradient(kHelmholtz, R / 2, R), SingularPointError);  // on a loop
-    EXPECT_THROW(stack_gradient(kHelmholtz, 0.0, -0.1), DomainError);
+    EXPECT_THROW(table_gradient(kHelmholtz, R / 2, R), SingularPointError);  // on a loop
+    EXPECT_THROW(table_gradient(kHelmholtz, 0.0, -0.1), DomainError);
 }

@@ -3,11 +3,10 @@
 
 #include <cmath>
 
-#include "coilwright/axial.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/sensitivity.hpp"
-#include "coilwright/uniformity.hpp"
+#include "coilwright/design.hpp"
 
 using namespace coilwright;
 

@@ -8,7 +8,8 @@
 #include <cmath>
 #include <cstdio>
 
-#include "coilwright/solenoid.hpp"
+#include "coilwright/field.hpp"
+#include "field/sheet_kernel.hpp"
 #include "reference_csv.hpp"
 
 using namespace coilwright;
@@ -50,7 +51,7 @@ TEST(SolenoidReference, AgreesWithMpmathAtRandomPoints) {
     for (const auto& row : rows) {
         const double a = row.num(0), z = row.num(1), r = row.num(2), h = row.num(3);
         const double bz_ref = row.num(4), br_ref = row.num(5);
-        const FieldRZ f = detail::sheet_field_normalized(z / a, r / a, (a - r) / a, h / a);
+        const FieldRZ f = internal::sheet_field_normalized(z / a, r / a, (a - r) / a, h / a);
         const double mag = std::hypot(bz_ref, br_ref);
         const double ebz = std::fabs(f.bz - bz_ref) / std::max(std::fabs(bz_ref), 1e-2 * mag);
         const double ebr = br_ref == 0.0 ? std::fabs(f.br) / mag : std::fabs(f.br - br_ref) / std::fabs(br_ref);

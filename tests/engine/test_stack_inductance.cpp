@@ -7,9 +7,7 @@
 #include <cmath>
 
 #include "coilwright/errors.hpp"
-#include "coilwright/mutual_inductance.hpp"
-#include "coilwright/self_inductance.hpp"
-#include "coilwright/stack_inductance.hpp"
+#include "coilwright/inductance.hpp"
 
 using namespace coilwright;
 
@@ -37,15 +35,15 @@ TEST(StackInductance, MatrixIsSymmetricPositiveDefiniteAndMatchesThePairs) {
     ASSERT_EQ(n, 7);
     for (Eigen::Index i = 0; i < n; ++i)
         for (Eigen::Index j = 0; j < n; ++j) {
-            ASSERT_TRUE(m.valid(i, j)) << m.problems[static_cast<std::size_t>(i * n + j)];
+            ASSERT_TRUE(m.valid(i, j)) << m.problems[static_cast<std::size_t>(i * n + j)].message;
             EXPECT_EQ(m.values(i, j), m.values(j, i));  // reciprocity, M12 = M21
         }
     // Entries are the pairwise functions.
     const auto& r = table.rows();
-    EXPECT_EQ(m.values(0, 1), 100.0 * 100.0 * winding_mutual_inductance({0.10, 0.12, 0.02}, {0.10, 0.12, 0.02}, 0.1));
+    EXPECT_EQ(m.values(0, 1), 100.0 * 100.0 * coil_mutual_inductance({0.10, 0.12, 0.02}, {0.10, 0.12, 0.02}, 0.1));
     EXPECT_LT(rel(m.values(2, 2), solenoid_inductance(0.06, 0.20, 300)), 1e-15);
     EXPECT_EQ(m.values(4, 4), loop_self_inductance(0.15, 1e-3, 5));
-    EXPECT_EQ(m.values(3, 4), 40.0 * 5.0 * winding_mutual_inductance({0.03, 0.08, 0}, {0.15, 0.15, 0}, r[4].centre_z - r[3].centre_z));
+    EXPECT_EQ(m.values(3, 4), 40.0 * 5.0 * coil_mutual_inductance({0.03, 0.08, 0}, {0.15, 0.15, 0}, r[4].centre_z - r[3].centre_z));
     // Magnetic energy (1/2) I^T L I > 0 for every current vector: positive definite.
     const Eigen::LLT<Eigen::MatrixXd> llt(m.values);
     EXPECT_EQ(llt.info(), Eigen::Success);
@@ -62,7 +60,7 @@ TEST(StackInductance, LoopsWithoutWireDiameterAreErrorCellsOnlyOnTheirDiagonal) 
     for (Eigen::Index i = 0; i < 7; ++i)
         for (Eigen::Index j = 0; j < 7; ++j) EXPECT_EQ(m.valid(i, j), !(i == 4 && j == 4)) << i << " " << j;
     EXPECT_TRUE(std::isnan(m.values(4, 4)));
-    EXPECT_NE(m.problems[4 * 7 + 4].find("row 5"), std::string::npos);
+    EXPECT_NE(m.problems[4 * 7 + 4].message.find("row 5"), std::string::npos);
 }
 
 TEST(StackInductance, CoincidentLoopsAreErrorCells) {
@@ -90,8 +88,8 @@ TEST(StackInductance, SeriesInductanceAndEnergyAreQuadraticForms) {
     EXPECT_LT(rel(stored_energy(table, 1e-3), 0.5 * current.dot(m.values * current)), 1e-14);
     // An anti-series pair (Maxwell or anti-Helmholtz gradient pair) has L1 + L2 - 2M.
     const CoilTable pair({{0.1, 0.12, 0.02, -0.05, 100, 1}, {0.1, 0.12, 0.02, 0.05, 100, -1}});
-    const double l = 1e4 * winding_self_inductance({0.1, 0.12, 0.02});
-    const double mm = 1e4 * winding_mutual_inductance({0.1, 0.12, 0.02}, {0.1, 0.12, 0.02}, 0.1);
+    const double l = 1e4 * coil_self_inductance({0.1, 0.12, 0.02});
+    const double mm = 1e4 * coil_mutual_inductance({0.1, 0.12, 0.02}, {0.1, 0.12, 0.02}, 0.1);
     EXPECT_LT(rel(series_inductance(pair, std::nullopt), 2 * l - 2 * mm), 1e-14);
     // Rows with current 0 are not in the circuit, and a loop row without a diameter is then harmless.
     const CoilTable with_idle({{0.1, 0.12, 0.02, 0, 100, 1}, {0.15, 0.15, 0, 0.2, 5, 0}});
@@ -104,7 +102,7 @@ TEST(StackInductance, ForcesBalanceAndMatchThePairs) {
     const MatrixWithProblems f = axial_forces(table);
     double sum = 0, scale = 0;
     for (Eigen::Index i = 0; i < 7; ++i) {
-        ASSERT_TRUE(f.valid(i, 0)) << f.problems[static_cast<std::size_t>(i)];
+        ASSERT_TRUE(f.valid(i, 0)) << f.problems[static_cast<std::size_t>(i)].message;
         sum += f.values(i, 0);
         scale += std::fabs(f.values(i, 0));
     }
@@ -112,7 +110,7 @@ TEST(StackInductance, ForcesBalanceAndMatchThePairs) {
     // A two-row table gives the pair force on row 2 and its opposite on row 1.
     const CoilTable pair({{0.1, 0.12, 0.02, -0.05, 100, 1}, {0.1, 0.12, 0.02, 0.05, 100, 1}});
     const MatrixWithProblems fp = axial_forces(pair);
-    const double expected = 1e4 * winding_mutual_inductance_slope({0.1, 0.12, 0.02}, {0.1, 0.12, 0.02}, 0.1);
+    const double expected = 1e4 * coil_mutual_inductance_slope({0.1, 0.12, 0.02}, {0.1, 0.12, 0.02}, 0.1);
     EXPECT_EQ(fp.values(1, 0), expected);
     EXPECT_EQ(fp.values(0, 0), -expected);
     EXPECT_LT(fp.values(1, 0), 0);  // like currents attract: row 2 is pulled towards -z

@@ -8,8 +8,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/solenoid.hpp"
-#include "coilwright/thick_coil.hpp"
+#include "coilwright/field.hpp"
 
 using namespace coilwright;
 

@@ -5,7 +5,7 @@
 
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/winding.hpp"
+#include "coilwright/wire.hpp"
 
 using namespace coilwright;
 

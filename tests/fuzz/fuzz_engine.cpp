@@ -9,10 +9,10 @@
 #include <string>
 #include <vector>
 
-#include "coilwright/bulirsch_cel.hpp"
+#include "numerics/bulirsch_cel.hpp"
 #include "coilwright/coil_table.hpp"
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
 

@@ -3,8 +3,7 @@
 
 #include <string>
 
-#include "coilwright/budget.hpp"
-#include "coilwright/conductor.hpp"
+#include "coilwright/wire.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 #include "call_by_name.hpp"

@@ -3,7 +3,7 @@
 
 #include <cmath>
 
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 

@@ -9,7 +9,7 @@
 #include <string>
 
 #include "coilwright/errors.hpp"
-#include "coilwright/loop.hpp"
+#include "coilwright/field.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 

@@ -6,9 +6,7 @@
 #include <string>
 #include <vector>
 
-#include "coilwright/coil_stack.hpp"
-#include "coilwright/solenoid.hpp"
-#include "coilwright/thick_coil.hpp"
+#include "coilwright/field.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 #include "call_by_name.hpp"
@@ -62,7 +60,7 @@ TEST(FieldFunctions, StackReadsTheTableOnceAndBroadcastsThePoints) {
     ASSERT_EQ(r.error, CellError::None) << r.message;
     ASSERT_TRUE(r.is_array);
     const CoilTable expected({{0.1, 0.1, 0, -0.05, 10, 1}, {0.05, 0.06, 0.02, 0.05, 100, 2}});
-    for (std::size_t i = 0; i < 3; ++i) EXPECT_EQ(r.values[i], stack_field(expected, std::vector{0.0, 0.02, 0.3}[i], 0.0).bz);
+    for (std::size_t i = 0; i < 3; ++i) EXPECT_EQ(r.values[i], table_field(expected, std::vector{0.0, 0.02, 0.3}[i], 0.0).bz);
     // A point on a row's sheet is an error cell, the others are computed.
     const Arg sheet = table({numbers({0.1, 0.1, 0.2, 0.0, 10, 1})});
     const auto e = call("STACK_BR", {sheet, column({0.0, 0.5}), Arg::number(0.1)});

@@ -4,8 +4,7 @@
 
 #include <cmath>
 
-#include "coilwright/mutual_inductance.hpp"
-#include "coilwright/self_inductance.hpp"
+#include "coilwright/inductance.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
 #include "call_by_name.hpp"
@@ -37,7 +36,7 @@ TEST(InductanceFunctions, ScalarFunctionsFollowTheCatalogueOrder) {
     EXPECT_EQ(r.values[0], loop_self_inductance(0.1, 1e-3, 1));
     r = call("COIL_M", {n(0.1), n(0.12), n(0.02), n(100), n(0.05), n(0.07), n(0.01), n(20), n(0.03)});
     ASSERT_EQ(r.error, CellError::None) << r.message;
-    EXPECT_EQ(r.values[0], 2000 * winding_mutual_inductance({0.1, 0.12, 0.02}, {0.05, 0.07, 0.01}, 0.03));
+    EXPECT_EQ(r.values[0], 2000 * coil_mutual_inductance({0.1, 0.12, 0.02}, {0.05, 0.07, 0.01}, 0.03));
     r = call("LOOP_FZ", {n(0.1), n(10), n(2), n(0.12), n(5), n(-1), n(0.04)});
     EXPECT_EQ(r.values[0], (10 * 2.0) * (5 * -1.0) * loop_mutual_inductance_slope(0.1, 0.12, 0.04));
     r = call("COIL_K", {n(0.1), n(0.12), n(0.02), n(0.1), n(0.12), n(0.02), n(0.0)});
@@ -49,7 +48,7 @@ TEST(InductanceFunctions, CoilLBroadcastsOverARange) {
     const auto r = call("COIL_L", {n(0.1), n(0.12), Arg::array(3, 1, lengths), n(50)});
     ASSERT_EQ(r.error, CellError::None);
     ASSERT_TRUE(r.is_array);
-    EXPECT_EQ(r.values[1], 2500 * winding_self_inductance({0.1, 0.12, 0.05}));
+    EXPECT_EQ(r.values[1], 2500 * coil_self_inductance({0.1, 0.12, 0.05}));
     EXPECT_EQ(r.errors[2], CellError::IllegalArgument);
     EXPECT_EQ(call("COIL_L", {n(0.1), n(0.12), n(0.02), n(-50)}).error, CellError::IllegalArgument);  // N^2 hides the sign
 }
@@ -90,7 +89,7 @@ TEST(InductanceFunctions, SeriesInductanceAndEnergy) {
     EXPECT_GT(r.values[0], 0);
     r = call("STACK_ENERGY", {table({{0.1, 0.12, 0.02, 0, 100, 2.0}}), Arg::missing()});
     ASSERT_EQ(r.error, CellError::None);
-    EXPECT_NEAR(r.values[0], 0.5 * 4 * 1e4 * winding_self_inductance({0.1, 0.12, 0.02}), 1e-15 * r.values[0]);
+    EXPECT_NEAR(r.values[0], 0.5 * 4 * 1e4 * coil_self_inductance({0.1, 0.12, 0.02}), 1e-15 * r.values[0]);
 }
 
 TEST(InductanceFunctions, BadTablesAreErrors) {

@@ -7,6 +7,18 @@
 
 namespace coilwright {
 
+// The cross-section of a coaxial coil centred at z = 0: radial extent inner..outer and axial
+// extent length, current spread uniformly over it. inner = outer is a current sheet (thin
+// solenoid), length = 0 a flat (pancake) winding, both a loop of coincident turns.
+struct CoilSection {
+    double inner_radius;  // m, > 0
+    double outer_radius;  // m, >= inner_radius
+    double length;        // m, >= 0
+};
+
+// Throws DomainError naming the bad value; `which` prefixes the message (e.g. "coil 1 ").
+void validate(const CoilSection& section, const char* which = "");
+
 // One coaxial coil. Six numbers, in the order of a sheet row.
 struct CoilRow {
     double inner_radius;  // m, > 0
@@ -24,6 +36,7 @@ struct CoilRow {
     };
     Kind kind() const;
     double ampere_turns() const { return turns * current; }
+    CoilSection section() const { return {inner_radius, outer_radius, length}; }
 };
 
 inline constexpr std::size_t kCoilTableColumns = 6;

@@ -25,4 +25,27 @@ public:
     using std::runtime_error::runtime_error;
 };
 
+// An engine error kept as data, for one entry of a result that could not be computed while
+// the others could (an inductance matrix, a column of forces): its kind and its message.
+struct Problem {
+    enum class Kind : unsigned char { None, Domain, Convergence };
+    Kind kind = Kind::None;
+    std::string message;
+
+    explicit operator bool() const { return kind != Kind::None; }
+
+    // The error being handled (inside a catch block of the engine's errors), its message
+    // prefixed with `where`.
+    static Problem domain(const std::string& where, const DomainError& e) { return {Kind::Domain, where + e.what()}; }
+    static Problem convergence(const std::string& where, const ConvergenceError& e) {
+        return {Kind::Convergence, where + e.what()};
+    }
+
+    // Throws it again as the error it was.
+    [[noreturn]] void raise() const {
+        if (kind == Kind::Convergence) throw ConvergenceError(message);
+        throw DomainError(message);
+    }
+};
+
 }  // namespace coilwright

@@ -1,0 +1,14 @@
+// The thick-winding field kernel in units of mu0 J, shared by the thick-coil field and the
+// table field.
+#pragma once
+
+#include "coilwright/field/field_rz.hpp"
+
+namespace coilwright::internal {
+
+// Integral over the winding radius a in [a1, a2] of the thin-sheet field (sheet_kernel.hpp) of
+// half-length h: the field in units of mu0 J (so in metres). Unchecked.
+FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double r,
+                                Components want = Components::Both);
+
+}  // namespace coilwright::internal

@@ -1,0 +1,160 @@
+// Mutual and self-inductance of coaxial windings, and the slope dM/dz that gives the force.
+//
+// The axial offset u = z2 - z1 of two points, one in each winding, is distributed as the
+// convolution of the two axial extents: a point (two flat windings), a box (one flat), or a
+// trapezoid rising over the shorter length, flat, and falling. The force needs
+// d/dd of the average of M over that weight. Where the cross-sections are well apart (their
+// separation at least a quarter of the offsets' span) the slope kernel dM/du, smooth there, is
+// averaged directly. Where they are close, touch or overlap, dM/du ~ 1/distance would be
+// costly or not integrable, so the derivative is moved onto the weight by parts (the
+// trapezoid's slope is +-1/(h1 h2) on its ramps, a box's derivative a pair of point masses),
+// which leaves only the kernel M: coinciding filaments then cost only a logarithm. (By parts is
+// not used far apart, where it would subtract nearly equal averages.)
+#include <algorithm>
+#include <cmath>
+#include <string>
+
+#include "numerics/checks.hpp"
+#include "coilwright/errors.hpp"
+#include "coilwright/inductance/mutual.hpp"
+#include "coilwright/inductance/self.hpp"
+#include "inductance/section_integral.hpp"
+
+namespace coilwright {
+
+using namespace internal;
+
+namespace {
+
+using internal::FilamentKernel;
+using internal::OffsetWeights;
+using internal::RadialExtent;
+
+constexpr int kEven = 1, kOdd = -1;
+
+RadialExtent radial(const CoilSection& w) { return {w.inner_radius, w.outer_radius}; }
+
+// Lengths and distances this many times the larger outer radius and more are refused: the
+// cubature's accuracy falls to about 1e-8 from a thousand radii on (measured up to a million),
+// and far beyond, its refinement stalls on differences that round away.
+constexpr double kMaxProportion = 1e6;
+
+void check_pair(const CoilSection& w1, const CoilSection& w2, double distance) {
+    validate(w1, "coil 1 ");
+    validate(w2, "coil 2 ");
+    check::finite(distance, "distance");
+    const double reach = std::max({w1.length, w2.length, std::fabs(distance)});
+    if (reach > kMaxProportion * std::max(w1.outer_radius, w2.outer_radius))
+        raise_domain_error("a length or the distance is more than a million times the larger outer radius: "
+                          "outside the accurate range");
+}
+
+// The weight of u = z2 - z1 for windings of lengths h1, h2 whose centres are d apart.
+OffsetWeights offset_weights(double h1, double h2, double d, int parity) {
+    OffsetWeights w;
+    if (h1 == 0.0 && h2 == 0.0) {
+        w.add_point(d, 1.0, parity);
+    } else if (h1 == 0.0 || h2 == 0.0) {
+        const double h = h1 + h2;
+        w.add_piece(d - 0.5 * h, d + 0.5 * h, 1.0 / h, 1.0 / h, parity);
+    } else {
+        const double shorter = std::fmin(h1, h2), height = 1.0 / std::fmax(h1, h2);
+        const double a = d - 0.5 * (h1 + h2), dd = d + 0.5 * (h1 + h2);
+        const double b = a + shorter, c = dd - shorter;
+        w.add_piece(a, b, 0.0, height, parity);
+        w.add_piece(b, c, height, height, parity);
+        w.add_piece(c, dd, height, 0.0, parity);
+    }
+    return w;
+}
+
+}  // namespace
+
+namespace {
+
+// Lengths in units of the larger outer radius keep every intermediate (weights 1/(h1 h2),
+// products of extents) representable for coils from micrometres to kilometres and beyond.
+struct Normalised {
+    CoilSection w1, w2;
+    double distance, scale;
+};
+
+Normalised normalise(const CoilSection& w1, const CoilSection& w2, double distance) {
+    const double s = std::fmax(w1.outer_radius, w2.outer_radius);
+    return {{w1.inner_radius / s, w1.outer_radius / s, w1.length / s}, {w2.inner_radius / s, w2.outer_radius / s, w2.length / s}, distance / s, s};
+}
+
+double mutual_normalised(const CoilSection& w1, const CoilSection& w2, double distance);
+double slope_normalised(const CoilSection& w1, const CoilSection& w2, double distance);
+
+}  // namespace
+
+double coil_mutual_inductance(const CoilSection& w1, const CoilSection& w2, double distance) {
+    check_pair(w1, w2, distance);
+    const Normalised n = normalise(w1, w2, distance);
+    // M scales like a length.
+    return check::finite_result(n.scale * mutual_normalised(n.w1, n.w2, n.distance), "the mutual inductance");
+}
+
+double coil_mutual_inductance_slope(const CoilSection& w1, const CoilSection& w2, double distance) {
+    check_pair(w1, w2, distance);
+    const Normalised n = normalise(w1, w2, distance);
+    return check::finite_result(slope_normalised(n.w1, n.w2, n.distance), "dM/dz");  // dimensionless in scale
+}
+
+namespace {
+
+double mutual_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
+    return internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
+}
+
+double slope_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    const double h1 = w1.length, h2 = w2.length;
+    const double reach = 0.5 * (h1 + h2);  // the offsets span distance -+ reach
+    const double radial_gap = std::fmax(0.0, std::fmax(w1.inner_radius, w2.inner_radius) - std::fmin(w1.outer_radius, w2.outer_radius));
+    const double axial_gap = std::fmax(0.0, std::fabs(distance) - reach);
+    const bool apart = std::hypot(radial_gap, axial_gap) >= 0.25 * (h1 + h2);
+    double slope;
+    if (h1 == 0.0 && h2 == 0.0) {
+        if (distance == 0.0) {
+            if (w1.inner_radius == w1.outer_radius && w2.inner_radius == w2.outer_radius && w1.inner_radius == w2.inner_radius)
+                raise_singular_point("the two loops coincide: the force between them is undefined");
+            return 0.0;  // flat windings in one plane: no axial force, by symmetry
+        }
+        OffsetWeights u;
+        u.add_point(distance, 1.0, kOdd);
+        slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Slope);
+    } else if (apart) {
+        const OffsetWeights u = offset_weights(h1, h2, distance, kOdd);
+        slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Slope);
+    } else {
+        // By parts: d/dd of the average of M is minus the average of M against the weight's slope.
+        OffsetWeights u;
+        if (h1 == 0.0 || h2 == 0.0) {
+            const double h = h1 + h2;
+            u.add_point(distance + 0.5 * h, 1.0 / h, kEven);
+            u.add_point(distance - 0.5 * h, -1.0 / h, kEven);
+        } else {
+            const double s = 1.0 / (h1 * h2), shorter = std::fmin(h1, h2);
+            u.add_piece(distance - reach, distance - reach + shorter, -s, -s, kEven);
+            u.add_piece(distance + reach - shorter, distance + reach, s, s, kEven);
+        }
+        slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
+    }
+    return slope;
+}
+
+}  // namespace
+
+double coil_self_inductance(const CoilSection& shape) {
+    validate(shape);
+    if (shape.inner_radius == shape.outer_radius) {
+        if (shape.length == 0.0)
+            raise_domain_error("a loop's self-inductance depends on its wire diameter (use LOOP_L)");
+        return solenoid_inductance(shape.inner_radius, shape.length, 1.0);
+    }
+    return coil_mutual_inductance(shape, shape, 0.0);
+}
+
+}  // namespace coilwright
