@@ -87,6 +87,7 @@ class CalcSession:
         return self.desktop.loadComponentFromURL(url, "_blank", 0, props(Hidden=True))
 
     def close(self):
+        office = self.soffice_pid() if getattr(self, "proc", None) is not None else None
         try:
             if getattr(self, "desktop", None) is not None:
                 self.desktop.terminate()
@@ -97,6 +98,17 @@ class CalcSession:
         except subprocess.TimeoutExpired:
             self.proc.kill()
             self.proc.wait()
+        # A LibreOffice that refused to terminate (after running out of memory, say) outlives its
+        # launcher: end it too, or it stays behind with its memory.
+        if office is not None and office != self.proc.pid:
+            deadline = time.time() + 10
+            while pathlib.Path(f"/proc/{office}").exists() and time.time() < deadline:
+                time.sleep(0.2)
+            try:  # only if it is still this session's LibreOffice (its profile is ours)
+                if str(self.dir) in pathlib.Path(f"/proc/{office}/cmdline").read_text(errors="replace"):
+                    os.kill(office, 9)
+            except OSError:
+                pass  # already gone
         if not self.keep_dir:
             shutil.rmtree(self.dir, ignore_errors=True)
 
