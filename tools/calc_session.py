@@ -27,9 +27,10 @@ def props(**kw):
 
 
 class CalcSession:
-    def __init__(self, oxt=None, keep_dir=False, timeout=60):
-        self.dir = pathlib.Path(tempfile.mkdtemp(prefix="coilwright-lo-"))
-        self.keep_dir = keep_dir
+    def __init__(self, oxt=None, keep_dir=False, timeout=60, directory=None):
+        # directory: use (and keep) the profile and shared-extension cache already in it.
+        self.dir = pathlib.Path(directory) if directory else pathlib.Path(tempfile.mkdtemp(prefix="coilwright-lo-"))
+        self.keep_dir = keep_dir or directory is not None
         self.env = [f"-env:UserInstallation=file://{self.dir}/profile",
                     f"-env:UNO_SHARED_PACKAGES_CACHE=file://{self.dir}/shared"]
         if oxt:
@@ -64,6 +65,20 @@ class CalcSession:
         except Exception:
             return False
 
+    def soffice_pid(self):
+        """The soffice.bin process under the launcher (the launcher may be it), or None."""
+        todo = [self.proc.pid]
+        while todo:
+            pid = todo.pop()
+            try:
+                if pathlib.Path(f"/proc/{pid}/comm").read_text().strip() == "soffice.bin":
+                    return pid
+                for task in pathlib.Path(f"/proc/{pid}/task").iterdir():
+                    todo += [int(c) for c in (task / "children").read_text().split()]
+            except OSError:
+                pass
+        return None
+
     def new_document(self):
         return self.desktop.loadComponentFromURL("private:factory/scalc", "_blank", 0, props(Hidden=True))
 
@@ -72,6 +87,7 @@ class CalcSession:
         return self.desktop.loadComponentFromURL(url, "_blank", 0, props(Hidden=True))
 
     def close(self):
+        office = self.soffice_pid() if getattr(self, "proc", None) is not None else None
         try:
             if getattr(self, "desktop", None) is not None:
                 self.desktop.terminate()
@@ -82,6 +98,17 @@ class CalcSession:
         except subprocess.TimeoutExpired:
             self.proc.kill()
             self.proc.wait()
+        # A LibreOffice that refused to terminate (after running out of memory, say) outlives its
+        # launcher: end it too, or it stays behind with its memory.
+        if office is not None and office != self.proc.pid:
+            deadline = time.time() + 10
+            while pathlib.Path(f"/proc/{office}").exists() and time.time() < deadline:
+                time.sleep(0.2)
+            try:  # only if it is still this session's LibreOffice (its profile is ours)
+                if str(self.dir) in pathlib.Path(f"/proc/{office}/cmdline").read_text(errors="replace"):
+                    os.kill(office, 9)
+            except OSError:
+                pass  # already gone
         if not self.keep_dir:
             shutil.rmtree(self.dir, ignore_errors=True)
 

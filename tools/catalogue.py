@@ -36,6 +36,13 @@ CXX_KEYWORDS = {
 KINDS = {"number", "gauge", "choice", "table"}
 CHOICE_KEYS = ("choices", "values", "aliases", "accept_numbers")
 CHOICE_SET_KEYS = CHOICE_KEYS + ("enum", "enumerators", "header")
+# A table argument is declared as a cell range in the interface: Calc then passes the range
+# object itself instead of converting every cell of it (a whole column is a million cells).
+# Calc passes nothing but references to such a parameter, so each function with a table also
+# gets an array twin, NAME + ARRAY_TWIN_SUFFIX, whose table is an `any`: an inline array {...}
+# or another function's result.
+CELL_RANGE_TYPE = "com::sun::star::table::XCellRange"
+ARRAY_TWIN_SUFFIX = "_ARRAY"
 README_BEGIN = "<!-- function-table:begin (generated from idl/functions/*.toml; do not edit) -->"
 README_END = "<!-- function-table:end -->"
 
@@ -66,6 +73,9 @@ def load(idl_dir):
         if fn["name"] in names:
             sys.exit(f"catalogue: duplicate function {fn['name']}")
         names.add(fn["name"])
+    for fn in data["function"]:
+        if has_table(fn) and array_twin_name(fn) in names:
+            sys.exit(f"catalogue: {array_twin_name(fn)} is the array twin of {fn['name']}; choose another name")
         seen_optional = False
         arg_names = set()
         for arg in fn["args"]:
@@ -168,17 +178,40 @@ def choice_help(arg):
     return text + "; case is ignored."
 
 
+def has_table(fn):
+    return any(arg.get("kind", "number") == "table" for arg in fn["args"])
+
+
+def array_twin_name(fn):
+    return fn["name"] + ARRAY_TWIN_SUFFIX
+
+
+def uno_methods(data):
+    """(method name, catalogue index, function, twin?) for every interface method: each function,
+    and after one with a table argument its array twin, which shares its catalogue index."""
+    for index, fn in enumerate(data["function"]):
+        yield fn["name"], index, fn, False
+        if has_table(fn):
+            yield array_twin_name(fn), index, fn, True
+
+
+def passed_by_reference(arg, twin):
+    return arg["kind"] == "table" and not twin
+
+
 def gen_idl(data):
     a = data["addin"]
     mods = a["module"].split(".")
     out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
-           "#include <com/sun/star/uno/XInterface.idl>", ""]
+           "#include <com/sun/star/uno/XInterface.idl>",
+           "#include <com/sun/star/table/XCellRange.idl>", ""]
     out += [f"module {m} {{" for m in mods]
     out.append(f"interface {a['interface']} : com::sun::star::uno::XInterface")
     out.append("{")
-    for fn in data["function"]:
-        params = ", ".join(f"[in] any {arg['name']}" for arg in fn["args"])
-        out.append(f"    any {fn['name']}({params});")
+    for method, _, fn, twin in uno_methods(data):
+        params = ", ".join(f"[in] {CELL_RANGE_TYPE if passed_by_reference(arg, twin) else 'any'} {arg['name']}"
+                           for arg in fn["args"])
+        out.append(f"    any {method}({params});")
     out.append("};")
     out += ["};" for _ in mods]
     return "\n".join(out) + "\n"
@@ -276,15 +309,24 @@ def gen_bindings(data):
 
 
 def gen_methods(data):
-    """Method declarations for the add-in class body: each forwards to one dispatcher."""
+    """Method declarations for the add-in class body: each forwards to one dispatcher, a range
+    passed by reference wrapped in an Any like every other argument."""
     out = ["// Generated from idl/functions/*.toml by tools/catalogue.py: do not edit.",
            "// Included inside the add-in class body (addin/uno/component.cpp).", ""]
-    for index, fn in enumerate(data["function"]):
-        params = ", ".join(f"const css::uno::Any& {arg['name']}" for arg in fn["args"])
-        ptrs = ", ".join(f"&{arg['name']}" for arg in fn["args"])
+    for method, index, fn, twin in uno_methods(data):
+        params, ptrs, wraps = [], [], []
+        for arg in fn["args"]:
+            if passed_by_reference(arg, twin):
+                params.append(f"const css::uno::Reference<css::table::XCellRange>& {arg['name']}")
+                wraps.append(f"    const css::uno::Any {arg['name']}Range({arg['name']});")
+                ptrs.append(f"&{arg['name']}Range")
+            else:
+                params.append(f"const css::uno::Any& {arg['name']}")
+                ptrs.append(f"&{arg['name']}")
         n = len(fn["args"])
-        out.append(f"css::uno::Any SAL_CALL {fn['name']}({params}) override {{")
-        out.append(f"    const css::uno::Any* args[{n}] = {{{ptrs}}};")
+        out.append(f"css::uno::Any SAL_CALL {method}({', '.join(params)}) override {{")
+        out += wraps
+        out.append(f"    const css::uno::Any* args[{n}] = {{{', '.join(ptrs)}}};")
         out.append(f"    return dispatch({index}, args, {n});")
         out.append("}")
     return "\n".join(out) + "\n"
@@ -295,9 +337,26 @@ def xml_value(text, lang=True):
     return f"<value{attr}>{html.escape(text, quote=False)}</value>"
 
 
-def arg_help(arg):
+def arg_help(arg, twin=False):
     # Calc lists every `any` argument as optional, so the help says which ones are not.
-    return arg["help"] + choice_help(arg) + (" Optional." if "default" in arg else " Required.")
+    return arg["help"] + choice_help(arg) + table_help(arg, twin) + (" Optional." if "default" in arg else " Required.")
+
+
+def table_help(arg, twin):
+    if arg["kind"] != "table":
+        return ""
+    if twin:
+        return " Here an inline array {...} or another function's result; a cell range goes to the function without _ARRAY."
+    return " A cell range on one sheet; for an inline array or another function's result use the function + _ARRAY."
+
+
+def twin_note(fn, twin):
+    if not has_table(fn):
+        return ""
+    if twin:
+        return (f" The same as {fn['name']}, with the coil table given as an inline array {{...}} or as another "
+                f"function's result (such as PAIR_COILS(...)).")
+    return f" The coil table is a cell range; {array_twin_name(fn)} takes it as an array."
 
 
 def gen_xcu(data):
@@ -309,18 +368,18 @@ def gen_xcu(data):
            '  <node oor:name="AddInInfo">',
            f'    <node oor:name="{a["service"]}" oor:op="replace">',
            '      <node oor:name="AddInFunctions">']
-    for fn in data["function"]:
-        desc = a["description_prefix"] + fn["summary"] + f" Returns {fn['returns']}."
-        out += [f'        <node oor:name="{fn["name"]}" oor:op="replace">',
-                f'          <prop oor:name="DisplayName">{xml_value(fn["name"])}</prop>',
+    for method, _, fn, twin in uno_methods(data):
+        desc = a["description_prefix"] + fn["summary"] + f" Returns {fn['returns']}." + twin_note(fn, twin)
+        out += [f'        <node oor:name="{method}" oor:op="replace">',
+                f'          <prop oor:name="DisplayName">{xml_value(method)}</prop>',
                 f'          <prop oor:name="Description">{xml_value(desc)}</prop>',
                 f'          <prop oor:name="Category">{xml_value(a["category"], lang=False)}</prop>',
-                f'          <prop oor:name="CompatibilityName">{xml_value(fn["name"])}</prop>',
+                f'          <prop oor:name="CompatibilityName">{xml_value(method)}</prop>',
                 '          <node oor:name="Parameters">']
         for arg in fn["args"]:
             out += [f'            <node oor:name="{arg["name"]}" oor:op="replace">',
                     f'              <prop oor:name="DisplayName">{xml_value(arg["name"])}</prop>',
-                    f'              <prop oor:name="Description">{xml_value(arg_help(arg))}</prop>',
+                    f'              <prop oor:name="Description">{xml_value(arg_help(arg, twin))}</prop>',
                     "            </node>"]
         out += ["          </node>", "        </node>"]
     out += ["      </node>", "    </node>", "  </node>", "</oor:component-data>"]
@@ -347,7 +406,8 @@ def gen_readme_table(data):
                 default = arg["default"] if isinstance(arg["default"], str) else f"{arg['default']:g}"
                 text = f"[{arg['name']} [{arg['unit']}] = {default}]"
             args.append(text)
-        out.append(f"| `{fn['name']}` | {md('; '.join(args))} | {md(fn['summary'])} ({md(fn['returns'])}) "
+        names = f"`{fn['name']}`" + (f", `{array_twin_name(fn)}`" if has_table(fn) else "")
+        out.append(f"| {names} | {md('; '.join(args))} | {md(fn['summary'])} ({md(fn['returns'])}) "
                    f"| {md(fn['accuracy'])} |")
     out += ["", README_END]
     return "\n".join(out) + "\n"

@@ -27,7 +27,23 @@ struct ElementOutcome {
 // Nonzero and below 2.2e-308 in magnitude: a number that has lost digits.
 bool is_subnormal(double v) { return v != 0.0 && std::fabs(v) < std::numeric_limits<double>::min(); }
 
+// The first control character of a text (C0, DEL or C1, as UTF-8), or -1. Such a text is
+// nothing a user means (CHAR(0) and friends come from formulas or pasted binary data): it is
+// refused rather than read up to the character or matched around it.
+int control_character(const std::string& text) {
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const auto byte = static_cast<unsigned char>(text[i]);
+        if (byte < 0x20 || byte == 0x7F) return byte;
+        if (byte == 0xC2 && i + 1 < text.size()) {
+            const auto next = static_cast<unsigned char>(text[i + 1]);
+            if (next >= 0x80 && next <= 0x9F) return next;  // U+0080..U+009F
+        }
+    }
+    return -1;
+}
+
 // Converts one cell of a numeric argument; returns false with a message when it is not a number.
+// Every text argument passes here, so this is the one place that refuses control characters.
 bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& message) {
     switch (cell.kind) {
         case CellKind::Number:
@@ -48,6 +64,11 @@ bool to_number(const Cell& cell, const ArgSpec& spec, double& out, std::string& 
             message = std::string(spec.name) + " is blank";
             return false;
         case CellKind::Text:
+            if (const int code = control_character(cell.text); code >= 0) {
+                message = std::string(spec.name) + " contains a control character (code " + std::to_string(code) +
+                          ", e.g. from CHAR()): not a valid text";
+                return false;
+            }
             if (spec.kind == ArgKind::Gauge) {
                 try {
                     out = parse_awg_gauge(cell.text);

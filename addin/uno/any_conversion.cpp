@@ -4,17 +4,21 @@
 #include <cstddef>
 #include <cstdint>
 #include <cstring>
+#include <string>
+#include <utility>
 
+#include <com/sun/star/table/XCellRange.hpp>
 #include <com/sun/star/uno/Sequence.hxx>
 #include <rtl/ustring.hxx>
+
+#include "../core/range_limits.hpp"
+#include "cell_range_arg.hpp"
 
 namespace coilwright::uno_glue {
 
 using css::uno::Any;
 using css::uno::Sequence;
 using namespace css::uno;  // TypeClass_* enumerators
-
-namespace {
 
 sheet::Cell to_cell(const Any& v) {
     switch (v.getValueTypeClass()) {
@@ -25,7 +29,10 @@ sheet::Cell to_cell(const Any& v) {
             v >>= s;
             // Calc passes blank cells of a range as empty strings (ScRangeToSequence::FillMixedArray).
             if (s.isEmpty()) return {};
-            return sheet::Cell::of_text(rtl::OUStringToOString(s, RTL_TEXTENCODING_UTF8).getStr());
+            // Every character, NULs included (a text is judged whole: core/evaluate.cpp refuses
+            // control characters); getStr() alone would stop at the first NUL.
+            const rtl::OString utf8 = rtl::OUStringToOString(s, RTL_TEXTENCODING_UTF8);
+            return sheet::Cell::of_text(std::string(utf8.getStr(), static_cast<std::size_t>(utf8.getLength())));
         }
         case TypeClass_DOUBLE:
             return sheet::Cell::of(*static_cast<const double*>(v.getValue()));
@@ -37,35 +44,45 @@ sheet::Cell to_cell(const Any& v) {
     }
 }
 
-}  // namespace
-
-sheet::Arg to_arg(const Any& value) {
-    if (!value.hasValue()) return sheet::Arg::missing();
-    if (value.getValueTypeClass() != TypeClass_SEQUENCE) return sheet::Arg::scalar(to_cell(value));
-    Sequence<Sequence<Any>> range;  // built only here: even an empty one costs a type lookup
-    if (value >>= range) {
-        // Read through a const view: the non-const accessors would copy the shared sequence.
-        const Sequence<Sequence<Any>>& view = range;
-        const std::size_t rows = static_cast<std::size_t>(view.getLength());
-        std::size_t cols = 0;
-        for (const auto& row : view) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
-        std::vector<sheet::Cell> cells(rows * cols);  // ragged rows leave blanks
-        for (std::size_t r = 0; r < rows; ++r) {
-            const auto& row = view[static_cast<sal_Int32>(r)];
-            sheet::Cell* out = cells.data() + r * cols;
-            for (sal_Int32 c = 0; c < row.getLength(); ++c) {
-                const Any& v = row[c];
-                if (v.getValueTypeClass() == TypeClass_DOUBLE) {  // the usual cell: no temporary
-                    out[c].kind = sheet::CellKind::Number;
-                    out[c].number = *static_cast<const double*>(v.getValue());
-                } else {
-                    out[c] = to_cell(v);
-                }
+sheet::Arg from_rows(const Sequence<Sequence<Any>>& view, const sheet::ArgSpec& spec) {
+    const std::size_t rows = static_cast<std::size_t>(view.getLength());
+    std::size_t cols = 0;
+    for (const auto& row : view) cols = std::max(cols, static_cast<std::size_t>(row.getLength()));
+    if (sheet::plan_range(spec, rows, cols) == sheet::RangePlan::WidthOnly) return sheet::Arg::array(0, cols, {});
+    std::vector<sheet::Cell> cells(rows * cols);  // ragged rows leave blanks
+    for (std::size_t r = 0; r < rows; ++r) {
+        const auto& row = view[static_cast<sal_Int32>(r)];
+        sheet::Cell* out = cells.data() + r * cols;
+        for (sal_Int32 c = 0; c < row.getLength(); ++c) {
+            const Any& v = row[c];
+            if (v.getValueTypeClass() == TypeClass_DOUBLE) {  // the usual cell: no temporary
+                out[c].kind = sheet::CellKind::Number;
+                out[c].number = *static_cast<const double*>(v.getValue());
+            } else {
+                out[c] = to_cell(v);
             }
         }
-        return sheet::Arg::array(rows, cols, std::move(cells));
     }
-    return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
+    return sheet::Arg::array(rows, cols, std::move(cells));
+}
+
+sheet::Arg to_arg(const Any& value, const sheet::ArgSpec& spec) {
+    if (!value.hasValue()) return sheet::Arg::missing();
+    switch (value.getValueTypeClass()) {
+        case TypeClass_SEQUENCE: {
+            Sequence<Sequence<Any>> range;  // built only here: even an empty one costs a type lookup
+            // Read through a const view: the non-const accessors would copy the shared sequence.
+            if (value >>= range) return from_rows(std::as_const(range), spec);
+            return sheet::Arg::scalar(sheet::Cell::of_text("(unsupported array)"));
+        }
+        case TypeClass_INTERFACE: {
+            css::uno::Reference<css::table::XCellRange> range(value, css::uno::UNO_QUERY);
+            if (!range.is()) return sheet::Arg::missing();  // an omitted range argument
+            return read_cell_range(range, spec);
+        }
+        default:
+            return sheet::Arg::scalar(to_cell(value));
+    }
 }
 
 bool plain_numbers(const Any* const* args, std::size_t count, double* numbers, std::uint32_t& omitted) {

@@ -1,11 +1,14 @@
 // The UNO component Calc instantiates: the interface generated from idl/functions/*.toml plus
 // XServiceName and XServiceInfo. Every method forwards to dispatch(), which converts the
-// arguments, runs the UNO-free evaluation and maps failures to exceptions Calc shows as
-// error cells (IllegalArgumentException: Err:502, NoConvergenceException: Err:523).
-#include <com/sun/star/lang/IllegalArgumentException.hpp>
+// arguments, runs the UNO-free evaluation and returns a failure as Calc's own error value (a
+// NaN carrying the error number: Err:502, Err:523, #VALUE!), which Calc shows exactly as it
+// shows the exceptions an add-in may throw (IllegalArgumentException: Err:502,
+// NoConvergenceException: Err:523). No exception leaves the add-in: the library carries its own
+// C++ runtime (addin/CMakeLists.txt), and an exception thrown by one runtime and caught by
+// another leaves both miscounting the exceptions in flight.
 #include <com/sun/star/lang/XServiceInfo.hpp>
 #include <com/sun/star/lang/XServiceName.hpp>
-#include <com/sun/star/sheet/NoConvergenceException.hpp>
+#include <com/sun/star/table/XCellRange.hpp>
 #include <com/sun/star/uno/XComponentContext.hpp>
 #include <cppuhelper/implbase3.hxx>
 #include <cppuhelper/supportsservice.hxx>
@@ -14,6 +17,7 @@
 #include <uno/mapping.hxx>
 
 #include <exception>
+#include <stdexcept>
 
 #include "../core/evaluate.hpp"
 #include "../core/fixed_vector.hpp"
@@ -72,20 +76,24 @@ private:
 
         sheet::CallResult result;
         try {
+            const sheet::FunctionSpec& spec = sheet::function_specs()[index];
             sheet::FixedVector<sheet::Arg, sheet::kMaxArgs> converted;  // no function has more (checked by a test)
-            for (std::size_t i = 0; i < count; ++i) converted.push_back(to_arg(*args[i]));  // throws beyond
+            for (std::size_t i = 0; i < count; ++i)
+                converted.push_back(to_arg(*args[i], spec.args[i]));  // throws beyond kMaxArgs or a range's limits
             result = sheet::evaluate(index, {converted.data(), count});
+        } catch (const std::invalid_argument& e) {  // DomainError: a range refused before it was read
+            result = sheet::CallResult::failure(sheet::CellError::IllegalArgument, e.what());
         } catch (const std::exception& e) {
             // Nothing may escape into Calc but the exceptions it understands.
             result = sheet::CallResult::failure(sheet::CellError::NoValue, e.what());
+        } catch (const uno::Exception& e) {  // Calc's range object failed while being read
+            result = sheet::CallResult::failure(sheet::CellError::NoValue,
+                                                rtl::OUStringToOString(e.Message, RTL_TEXTENCODING_UTF8).getStr());
+        } catch (...) {
+            result = sheet::CallResult::failure(sheet::CellError::NoValue, "unexpected failure");
         }
         if (result.error == sheet::CellError::None) return to_any(result);
-        const OUString message = OUString::fromUtf8(result.message.c_str());
-        if (result.error == sheet::CellError::NoConvergence)
-            throw css::sheet::NoConvergenceException(message, static_cast<cppu::OWeakObject*>(this));
-        if (result.error == sheet::CellError::IllegalArgument)
-            throw css::lang::IllegalArgumentException(message, static_cast<cppu::OWeakObject*>(this), 0);
-        throw uno::RuntimeException(message, static_cast<cppu::OWeakObject*>(this));
+        return uno::Any(calc_error_value(result.error));  // the whole cell (or array formula) an error
     }
 };
 

@@ -15,6 +15,8 @@ ERR_ILLEGAL_ARGUMENT = 502  # Calc's Err:502, what the add-in's IllegalArgumentE
 ERR_NO_CONVERGENCE = 523
 ERR_DIV_ZERO = 532
 ERR_OVERFLOW = 503  # Calc's #NUM! for an overflowing expression
+ERR_PARAMETER_LIST = 504  # Calc's own refusal of an argument its parameter cannot take
+ERR_VALUE = 519  # Calc's #VALUE!
 
 
 def read_reference(name):

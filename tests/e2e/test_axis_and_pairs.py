@@ -18,11 +18,11 @@ def loop_axis(z, a=R, turns=N, current=I):
 class AxisAndPairs(CalcTestCase):
     def test_helmholtz_pair_from_an_inline_table(self):
         b0 = (4 / 5) ** 1.5 * MU0 * N * I / R  # textbook Helmholtz centre field
-        self.assert_rel(self.value("A1", f"=STACK_DNBZ({HELMHOLTZ};0)"), b0, 1e-14, "B0")
-        self.assertLess(abs(self.value("A2", f"=STACK_DNBZ({HELMHOLTZ};2)")) * R * R / b0, 1e-13)
+        self.assert_rel(self.value("A1", f"=STACK_DNBZ_ARRAY({HELMHOLTZ};0)"), b0, 1e-14, "B0")
+        self.assertLess(abs(self.value("A2", f"=STACK_DNBZ_ARRAY({HELMHOLTZ};2)")) * R * R / b0, 1e-13)
         self.assert_rel(self.value("A3", "=HELMHOLTZ_B0(0.3;50;1)"), b0, 1e-15, "HELMHOLTZ_B0")
         # Orders as a range: one call, a column of derivatives.
-        got = self.array("B1:B5", f"=STACK_DNBZ({HELMHOLTZ};{{0|1|2|3|4}})")
+        got = self.array("B1:B5", f"=STACK_DNBZ_ARRAY({HELMHOLTZ};{{0|1|2|3|4}})")
         self.assert_rel(got[4][0], -144 / 125 * 24 * b0 / R ** 4, 1e-12, "fourth derivative")
         self.assertEqual(got[1][0], 0.0)
 
@@ -45,7 +45,7 @@ class AxisAndPairs(CalcTestCase):
                 hi = mid
             else:
                 lo = mid
-        self.assert_rel(self.value("A1", f"=STACK_UNIFORM_Z({HELMHOLTZ};0.001)"), lo, 1e-9, "uniform half-length")
+        self.assert_rel(self.value("A1", f"=STACK_UNIFORM_Z_ARRAY({HELMHOLTZ};0.001)"), lo, 1e-9, "uniform half-length")
 
     def test_pair_geometry(self):
         self.assert_rel(self.value("A1", "=PAIR_SPACING(0.25;0.25;0)"), 0.25, 1e-14, "Helmholtz spacing")
@@ -56,7 +56,7 @@ class AxisAndPairs(CalcTestCase):
         self.assert_rel(self.value("A3", f"=GRADPAIR_GRADIENT(0.25;0.25;0;40;2;{s!r})"), g, 1e-13, "gradient")
         self.assert_rel(self.value("A4", "=PAIR_B0(0.3;0.3;0;50;1;0.3)"), (4 / 5) ** 1.5 * MU0 * 50 / 0.3, 1e-14, "pair B0")
         # The linear region of that gradient pair exists and is a fraction of the radius.
-        h = self.value("A5", f"=STACK_LINEAR_Z({{0.25;0.25;0;{-s / 2!r};40;-2|0.25;0.25;0;{s / 2!r};40;2}};0.01)")
+        h = self.value("A5", f"=STACK_LINEAR_Z_ARRAY({{0.25;0.25;0;{-s / 2!r};40;-2|0.25;0.25;0;{s / 2!r};40;2}};0.01)")
         self.assertTrue(0.02 < h < 0.25, h)
 
     def test_bad_inputs(self):

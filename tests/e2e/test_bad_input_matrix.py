@@ -11,6 +11,10 @@ afterwards gives exactly the same value. A catalogue function without cases FAIL
 new function cannot slip through. Many formulas go into one sheet per function and are
 calculated together, so the whole matrix costs one LibreOffice start.
 
+A function with a coil table is run twice: as itself, whose table is a cell range (the runner
+writes every inline-array table of the cases into cells and passes its reference), and as its
+array twin NAME_ARRAY, which takes the tables as the cases write them.
+
 Keys of a case besides good, bad and bad_calls: "text": True for a function that returns text;
 "shaped": True for one whose result has its own shape (single values besides its table);
 "table_row_arg": i when argument i numbers the rows of the table by position in the range.
@@ -21,6 +25,7 @@ import pathlib
 import time
 import unittest
 
+from bad_input_check import TableCells, callables_of, column_name, parse_inline_array
 from catalogue import load as load_catalogue
 from e2e_support import CalcTestCase
 
@@ -58,30 +63,21 @@ def load_cases():
     return cases
 
 
-def parse_inline_array(text):
-    """'{1;2|3;4}' -> [['1','2'],['3','4']], or None when text is not an inline array."""
-    text = text.strip()
-    if not (text.startswith("{") and text.endswith("}")):
-        return None
-    return [row.split(";") for row in text[1:-1].split("|")]
-
-
-def column_name(index):
-    name = ""
-    index += 1
-    while index:
-        index, rem = divmod(index - 1, 26)
-        name = chr(65 + rem) + name
-    return name
-
-
 def call(name, args):
     return f"={name}({';'.join(args)})"
 
 
-def scalar_variants(fn, case):
-    """(label, formula) pairs that must each give an error cell."""
-    name, args, good = fn["name"], fn["args"], case["good"]
+def callables(catalogue):
+    """(name as typed, catalogue entry, tables given as cell ranges?) for every function and
+    every array twin."""
+    for fn in catalogue.values():
+        yield from callables_of(fn)
+
+
+def scalar_variants(fn, case, name=None, bind=list):
+    """(label, formula) pairs that must each give an error cell; bind(args) turns the arguments
+    into what is typed (tables into cell references for a function that takes ranges)."""
+    name, args, good = name or fn["name"], fn["args"], case["good"]
     out = []
     required = sum(1 for a in args if "default" not in a)
     for i, arg in enumerate(args):
@@ -94,11 +90,11 @@ def scalar_variants(fn, case):
         for label, value in values:
             substituted = list(good)
             substituted[i] = value
-            out.append((f"{arg['name']}: {label}", call(name, substituted)))
+            out.append((f"{arg['name']}: {label}", call(name, bind(substituted))))
     for k in range(required):
-        out.append((f"call cut short after {k} arguments", call(name, good[:k])))
+        out.append((f"call cut short after {k} arguments", call(name, bind(good[:k]))))
     for bad in case.get("bad_calls", []):
-        out.append(("bad call", call(name, bad)))
+        out.append(("bad call", call(name, bind(bad))))
     return out
 
 
@@ -172,14 +168,16 @@ class BadInputMatrix(CalcTestCase):
     def test_every_bad_value_of_every_argument_is_an_error_cell(self):
         total = 0
         start = time.time()
-        for name, fn in self.catalogue.items():
-            case = self.cases.get(name)
+        for name, fn, by_reference in callables(self.catalogue):
+            case = self.cases.get(fn["name"])
             if case is None:
                 continue  # reported by test_every_catalogue_function_has_bad_input_cases
             with self.subTest(function=name):
                 sheet = self.new_sheet(name)
-                good = call(name, case["good"])
-                variants = scalar_variants(fn, case)
+                tables = TableCells(sheet)
+                bind = lambda args: tables.bind(fn, by_reference, args)  # noqa: E731
+                good = call(name, bind(case["good"]))
+                variants = scalar_variants(fn, case, name, bind)
                 self.put_formulas(sheet, 0, [good] + [f for _, f in variants])
                 first = self.outcome(sheet.getCellByPosition(0, 0))
                 self.check_good(fn, case, first, good)
@@ -194,20 +192,22 @@ class BadInputMatrix(CalcTestCase):
                 after.setFormula(good)
                 self.assertEqual(self.outcome(after), first, f"{name}: the valid call changed after bad ones")
                 total += len(variants)
-        print(f"\nbad-input matrix: {total} bad formulas over {len(self.catalogue)} functions "
+        print(f"\nbad-input matrix: {total} bad formulas over {len(list(callables(self.catalogue)))} functions "
               f"in {time.time() - start:.1f} s", flush=True)
 
     # --- ranges: shapes, blanks, text, errors, tables ------------------------------------------
     def test_ranges_of_mismatched_shape_blanks_text_and_errors(self):
-        for name, fn in self.catalogue.items():
-            case = self.cases.get(name)
+        for name, fn, by_reference in callables(self.catalogue):
+            case = self.cases.get(fn["name"])
             if case is None:
                 continue
             with self.subTest(function=name):
-                self.check_ranges(self.new_sheet(name), fn, case)
+                sheet = self.new_sheet(name)
+                tables = TableCells(sheet)
+                self.check_ranges(sheet, fn, case, name, lambda args: tables.bind(fn, by_reference, args))
 
-    def check_ranges(self, sheet, fn, case):
-        name, good = fn["name"], case["good"]
+    def check_ranges(self, sheet, fn, case, name, bind):
+        good = bind(case["good"])
         good_cell = sheet.getCellByPosition(0, 0)
         good_cell.setFormula(call(name, good))
         want = self.outcome(good_cell)
@@ -273,11 +273,11 @@ class BadInputMatrix(CalcTestCase):
         for i, arg in enumerate(fn["args"]):
             if arg["kind"] != "table":
                 continue
-            table = parse_inline_array(good[i])
+            table = parse_inline_array(case["good"][i])
             self.assertIsNotNone(table, f"{name}: give the valid {arg['name']} as an inline array")
             for label, bad in table_mutations(table):
                 args = list(good)
-                args[i] = bad
+                args[i] = bind([a if k != i else bad for k, a in enumerate(case["good"])])[i]
                 c = sheet.getCellByPosition(column, 0)
                 c.setFormula(call(name, args))
                 self.assert_rejected(c, case, want, f"{name}: table with {label}")
@@ -321,14 +321,15 @@ class BadInputMatrix(CalcTestCase):
     # --- huge ranges: refused quickly or computed, never a hang --------------------------------
     def test_huge_broadcast_is_refused_quickly_for_every_function(self):
         # 3000 x 3000 = 9 million elements, over the 4 million limit: refused before any work.
-        for name, fn in self.catalogue.items():
-            case = self.cases.get(name)
+        tables = TableCells(self.sheet)
+        for name, fn, by_reference in callables(self.catalogue):
+            case = self.cases.get(fn["name"])
             numeric = [i for i, a in enumerate(fn["args"]) if a["kind"] != "table"]
             if case is None or len(numeric) < 2 or case.get("text"):
                 continue
             with self.subTest(function=name):
                 i, j = numeric[-2], numeric[-1]
-                args = list(case["good"])
+                args = tables.bind(fn, by_reference, case["good"])
                 args[i] = f"(({args[i]})+0*ROW($A$1:$A$3000))"
                 args[j] = f"(({args[j]})+0*TRANSPOSE(ROW($A$1:$A$3000)))"
                 c = self.cell("A1")

@@ -56,7 +56,7 @@ class ForceFunctionsInCalc(CalcTestCase):
     def test_bad_input_gives_error_cells(self):
         for text in ("=LOOP_FZ(0.1;1;1;0.1;1;1;0)", "=LOOP_FZ(0;1;1;0.1;1;1;1)", "=LOOP_FZ(0.1;-1;1;0.1;1;1;1)",
                      "=COIL_FZ(0.1;0.1;0;1;1;0.1;0.1;0.2;1;1;0.1)", "=COIL_FZ(0.2;0.1;0.1;1;1;0.1;0.12;0.1;1;1;1)",
-                     "=STACK_FZ({0.1;0.12;0.02;0;100})", "=SOLENOID_PRESSURE(0.1;0;1;1)",
+                     "=STACK_FZ_ARRAY({0.1;0.12;0.02;0;100})", "=SOLENOID_PRESSURE(0.1;0;1;1)",
                      "=SOLENOID_PRESSURE(0.1;0.1;1;1E200)"):
             with self.subTest(text=text):
                 self.assert_error(text, where="A1")

@@ -100,9 +100,9 @@ class InductanceFunctionsInCalc(CalcTestCase):
         for text in ("=SOLENOID_L(0;1;1)", "=SOLENOID_L(1;0;1)", "=SOLENOID_L(1;1;-1)", "=LOOP_M(0.1;0.1;0)",
                      "=LOOP_M(-0.1;0.1;1)", "=LOOP_L(0.1;0.2)", "=LOOP_L(0.1;0)", "=COIL_L(0.1;0.1;0;10)",
                      "=COIL_L(0.2;0.1;0.1;10)", "=COIL_M(0.1;0.1;0;1;0.1;0.1;0;1;0)",
-                     "=COIL_K(0.1;0.1;0;0.1;0.12;0.02;0.1)", "=STACK_LMATRIX({0.1;0.12;0.02;0;100})",
-                     "=STACK_LMATRIX({0.1;0.12;0.02;0;100;1};-1)", '=COIL_L("0.1";0.12;0.02;1)',
-                     "=STACK_L({0.1;0.12;0.02;0;100;0})"):
+                     "=COIL_K(0.1;0.1;0;0.1;0.12;0.02;0.1)", "=STACK_LMATRIX_ARRAY({0.1;0.12;0.02;0;100})",
+                     "=STACK_LMATRIX_ARRAY({0.1;0.12;0.02;0;100;1};-1)", '=COIL_L("0.1";0.12;0.02;1)',
+                     "=STACK_L_ARRAY({0.1;0.12;0.02;0;100;0})"):
             with self.subTest(text=text):
                 self.assert_error(text, where="A1")
         self.assert_error("=SOLENOID_L(1/0;1;1)", ERR_DIV_ZERO)

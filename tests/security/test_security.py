@@ -1,7 +1,8 @@
 """What can be checked of the security promises, on the built artefacts.
 
 The add-in touches no files, network or environment, starts no process and evaluates no user
-string as code; the workbooks carry no macros; the extension names its version and license.
+string as code; the workbooks carry no macros; the extension names its version and license, and
+declares the LibreOffice and platform it needs, which its library's needs do not exceed.
 The one exception is the share command (menu Coilwright > Save Frozen Copy for Sharing,
 addin/uno/share_command.cpp and the files it uses): when the user asks, it writes a frozen copy
 and a PDF beside the workbook through LibreOffice's own document services, still without any
@@ -36,15 +37,27 @@ FORBIDDEN_IMPORT = re.compile(
 # LibreOffice OS-layer functions that are only locks and counters.
 ALLOWED_OSL = re.compile(r"^osl_(acquireMutex|releaseMutex|tryToAcquireMutex|createMutex|destroyMutex|"
                          r"getGlobalMutex|incrementInterlockedCount|decrementInterlockedCount)$")
+# ld-linux for the thread-local state of the C++ runtime, which is linked into the library.
 ALLOWED_LIBRARIES = {"libuno_cppuhelpergcc3.so.3", "libuno_cppu.so.3", "libuno_sal.so.3", "libstdc++.so.6",
-                     "libm.so.6", "libgcc_s.so.1", "libc.so.6"}
+                     "libm.so.6", "libgcc_s.so.1", "libc.so.6", "ld-linux-x86-64.so.2"}
 OXT_CONTENT = {"META-INF/manifest.xml", "description.xml", "description-en.txt", "LICENSE.txt",
                "coilwright.components", "coilwright.rdb", "CalcAddIns.xcu", "Addons.xcu", "ProtocolHandler.xcu",
                LIBRARY}
 # The share command's sources: they may open LibreOffice services (storage, desktop, toolkit).
 SHARE_COMMAND = re.compile(r"^addin/uno/(share_\w+|freeze_\w+|exact_values)\.(cpp|hpp)$")
 DESCRIPTION_NS = {"d": "http://openoffice.org/extensions/description/2006",
+                  "l": "http://libreoffice.org/extensions/description/2011",
                   "xlink": "http://www.w3.org/1999/xlink"}
+# What the oldest Linux supported by a LibreOffice version offers, per symbol-version family.
+# From memory (not re-checked here): LibreOffice's system requirements for the 7.x releases
+# (https://www.libreoffice.org/get-help/system-requirements/) ask for glibc 2.17 on GNU/Linux,
+# the C library of RHEL/CentOS 7, the baseline of The Document Foundation's builds; its GCC 4.8.5
+# runtime defines up to GCC_4.8.0 (libgcc_s), GLIBCXX_3.4.19 and CXXABI_1.3.7 (GCC manual,
+# "ABI Policy and Guidelines", symbol versions by release). A version declared in
+# description.xml needs a line here before the test passes.
+OLDEST_LINUX = {
+    "7.4": {"GLIBC": "2.17", "GCC": "4.8.0", "GLIBCXX": "3.4.19", "CXXABI": "1.3.7"},
+}
 
 
 def extracted_library(tmp):
@@ -54,6 +67,28 @@ def extracted_library(tmp):
 
 def tool(*cmd):
     return subprocess.run(cmd, check=True, capture_output=True, text=True).stdout
+
+
+def version_tuple(text):
+    return tuple(int(p) for p in re.split(r"[._]", text))
+
+
+def version_needs(library):
+    """{(file, version name)} from the library's .gnu.version_r (readelf -V)."""
+    needs, current = set(), None
+    for line in tool("readelf", "-V", "--wide", str(library)).splitlines():
+        m = re.search(r"File: (\S+)", line)
+        if m:
+            current = m.group(1)
+        m = re.search(r"Name: (\S+)\s+Flags", line)
+        if m and current:
+            needs.add((current, m.group(1)))
+    return needs
+
+
+def description():
+    with zipfile.ZipFile(OXT) as z:
+        return ET.fromstring(z.read("description.xml"))
 
 
 class AddinLibrary(unittest.TestCase):
@@ -90,6 +125,75 @@ class AddinLibrary(unittest.TestCase):
         rtti = {s for s in exported if re.match(r"^_ZT[IS]N3com3sun4star", s)}
         self.assertEqual(exported - rtti, {"org_coilwright_Functions_get_implementation",
                                            "org_coilwright_ShareCommand_get_implementation"})
+
+
+class DeclaredRequirements(unittest.TestCase):
+    """description.xml says what the extension needs; the library's ELF headers say what it
+    really needs. An older LibreOffice or system than declared must refuse the extension, never
+    install it and show #NAME? everywhere."""
+
+    @classmethod
+    def setUpClass(cls):
+        import tempfile
+        cls.tmp = tempfile.TemporaryDirectory()
+        cls.library = extracted_library(cls.tmp.name)
+        cls.needs = version_needs(cls.library)
+        cls.root = description()
+        minimal = cls.root.find("d:dependencies/l:LibreOffice-minimal-version", DESCRIPTION_NS)
+        cls.declared = minimal.get("value") if minimal is not None else None
+
+    @classmethod
+    def tearDownClass(cls):
+        cls.tmp.cleanup()
+
+    def test_declares_a_libreoffice_version_and_no_openoffice_one(self):
+        self.assertIsNotNone(self.declared, "no LibreOffice-minimal-version in description.xml")
+        self.assertRegex(self.declared, r"^\d+\.\d+$")
+        deps = self.root.find("d:dependencies", DESCRIPTION_NS)
+        others = [e.tag for e in deps if not e.tag.endswith("}LibreOffice-minimal-version")]
+        self.assertEqual(others, [], "only the LibreOffice version is declared (OpenOffice.org 4.0 was a false promise)")
+        self.assertIn(self.declared, OLDEST_LINUX, "add the oldest Linux of that LibreOffice version to OLDEST_LINUX")
+        self.assertGreater(len(self.needs), 5, "readelf found no version needs: wrong file?")
+
+    def test_declares_the_platform_the_library_is_built_for(self):
+        platform = self.root.find("d:platform", DESCRIPTION_NS)
+        self.assertIsNotNone(platform)
+        self.assertEqual(platform.get("value"), "linux_x86_64")
+        header = tool("readelf", "-h", str(self.library))
+        self.assertRegex(header, r"Class:\s+ELF64")
+        self.assertRegex(header, r"Machine:\s+Advanced Micro Devices X86-64")
+
+    def test_needs_no_newer_libreoffice_than_declared(self):
+        udk = [name for _, name in self.needs if name.startswith("LIBO_UDK_")]
+        self.assertTrue(udk, "no LIBO_UDK_ need found")
+        newest = max(udk, key=lambda n: version_tuple(n[len("LIBO_UDK_"):]))
+        self.assertLessEqual(version_tuple(newest[len("LIBO_UDK_"):]), version_tuple(self.declared),
+                             f"the library needs {newest}, newer than the declared LibreOffice {self.declared}")
+        print(f"\nnewest LibreOffice interface needed: {newest}; declared: LibreOffice {self.declared}")
+
+    def test_needs_no_newer_system_than_the_oldest_linux_of_that_version(self):
+        limits = OLDEST_LINUX.get(self.declared, {})
+        too_new, newest = [], {}
+        for file, name in sorted(self.needs):
+            family, _, number = name.partition("_")
+            if family not in ("GLIBC", "GCC", "GLIBCXX", "CXXABI"):
+                continue
+            if family not in limits or version_tuple(number) > version_tuple(limits[family]):
+                too_new.append(f"{name} ({file})")
+            if family not in newest or version_tuple(number) > version_tuple(newest[family]):
+                newest[family] = number
+        self.assertEqual(too_new, [], f"newer than the oldest Linux of LibreOffice {self.declared} offers ({limits})")
+        print("\nnewest system versions needed: " + ", ".join(f"{k}_{v}" for k, v in sorted(newest.items())))
+
+    def test_carries_no_path_of_the_build_machine(self):
+        dynamic = tool("readelf", "-d", str(self.library))
+        self.assertNotRegex(dynamic, r"\((RPATH|RUNPATH)\)")
+
+    def test_links_to_no_web_site(self):
+        # The project holds no web domain: the publisher is named, not linked.
+        links = [e.get(f"{{{DESCRIPTION_NS['xlink']}}}href") for e in self.root.iter()]
+        links = [link for link in links if link and re.match(r"(?i)[a-z]+://", link)]
+        self.assertEqual(links, [])
 
 
 class AddinSource(unittest.TestCase):

@@ -1,6 +1,8 @@
 // "choice" arguments: text from a fixed list, case-insensitive, converted before broadcasting.
 #include <gtest/gtest.h>
 
+#include <string>
+
 #include "coilwright/wire.hpp"
 #include "core/catalogue.hpp"
 #include "core/evaluate.hpp"
@@ -71,4 +73,22 @@ TEST(ChoiceArgs, ThermalRunawayIsAnErrorCell) {
                                                  Arg::missing(), Arg::missing()});
     EXPECT_EQ(r.error, CellError::IllegalArgument);
     EXPECT_NE(r.message.find("runaway"), std::string::npos) << r.message;
+}
+
+// Text as Calc passes it may hold any character; "copper"&CHAR(0)&"junk" once read as "copper".
+TEST(ChoiceArgs, TextWithAControlCharacterIsAnErrorNamingIt) {
+    using namespace std::string_literals;
+    for (const std::string& bad : {"copper\0junk"s, "copper\t"s, "cop\nper"s, "copper\x7f"s, "\x01"s,
+                                   "copper\xc2\x85"s /* U+0085, a C1 control */}) {
+        const auto r = call("WIRE_RESISTANCE", {Arg::number(1e-3), Arg::number(10), Arg::scalar(Cell::of_text(bad)),
+                                                Arg::missing()});
+        EXPECT_EQ(r.error, CellError::IllegalArgument) << bad;
+        EXPECT_NE(r.message.find("control character"), std::string::npos) << r.message;
+    }
+    EXPECT_EQ(call("INSULATION_CLASS_LIMIT", {Arg::scalar(Cell::of_text("F\0zzz"s))}).error,
+              CellError::IllegalArgument);
+    EXPECT_EQ(call("AWG_DIAMETER", {Arg::scalar(Cell::of_text("2/0\0"s))}).error, CellError::IllegalArgument);
+    // Other characters beyond ASCII are no control characters: "é" is just not a material.
+    const auto r = call("WIRE_RESISTANCE", {Arg::number(1e-3), Arg::number(10), text("copp\xc3\xa9r"), Arg::missing()});
+    EXPECT_EQ(r.message.find("control character"), std::string::npos) << r.message;
 }
