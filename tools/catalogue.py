@@ -33,7 +33,9 @@ CXX_KEYWORDS = {
     "static", "struct", "switch", "template", "this", "throw", "true", "try", "typedef", "typeid", "typename",
     "union", "unsigned", "using", "virtual", "void", "volatile", "while", "xor", "from",
 }
-KINDS = {"number", "gauge", "choice", "table"}
+KINDS = {"number", "gauge", "choice", "table", "raw"}
+# Kinds passed to the implementation whole, never broadcast.
+WHOLE_KINDS = {"table", "raw"}
 CHOICE_KEYS = ("choices", "values", "aliases", "accept_numbers")
 CHOICE_SET_KEYS = CHOICE_KEYS + ("enum", "enumerators", "header")
 # A table argument is declared as a cell range in the interface: Calc then passes the range
@@ -102,16 +104,19 @@ def load(idl_dir):
         for key in ("group", "returns", "summary", "accuracy"):
             if not fn.get(key):
                 sys.exit(f"catalogue: {fn['name']}: missing {key}")
-        # returns = "text": the result is one text value (no broadcasting), so every argument is a table.
-        if fn["returns"] == "text" and any(arg["kind"] != "table" for arg in fn["args"]):
-            sys.exit(f"catalogue: {fn['name']}: a text result needs table arguments only")
+        # returns = "text": the result is one text value (no broadcasting), so every argument is
+        # passed whole (a table or a raw value).
+        if fn["returns"] == "text" and any(arg["kind"] not in WHOLE_KINDS for arg in fn["args"]):
+            sys.exit(f"catalogue: {fn['name']}: a text result takes only arguments passed whole (table, raw)")
     return data
 
 
 def check_vocabulary(fn_name, arg, vocabulary):
-    """An argument is named from the vocabulary (idl/addin.toml), with a trailing 1 or 2 for
-    two objects of one call, and has the vocabulary's unit."""
-    base = arg["name"][:-1] if arg["name"][-1:] in ("1", "2") and arg["name"][:-1] in vocabulary else arg["name"]
+    """An argument is named from the vocabulary (idl/addin.toml), with a trailing number for
+    several objects of one call (radius1, radius2; argument1 .. argument15), and has the
+    vocabulary's unit."""
+    stem = arg["name"].rstrip("0123456789")
+    base = stem if stem != arg["name"] and stem in vocabulary else arg["name"]
     if base not in vocabulary:
         sys.exit(f"catalogue: {fn_name}.{arg['name']}: not in the argument vocabulary of idl/addin.toml "
                  "(use its name for the quantity, or add the new quantity there)")
@@ -241,7 +246,7 @@ def gen_specs(data):
                 default = "0.0"
             else:
                 extra = "nullptr, 0, false, nullptr"
-                default = repr(float(arg.get("default", 0.0)))
+                default = "0.0" if arg["kind"] == "raw" else repr(float(arg.get("default", 0.0)))
             rows.append(f"    {{{cxx_string(arg['name'])}, ArgKind::{arg['kind'].capitalize()}, {optional}, {default}, {extra}}},")
         out.append(f"const ArgSpec kArgs_{fn['name']}[] = {{")
         out += rows
@@ -278,8 +283,8 @@ def gen_args(data):
                        f"\"choice set {set_name}: {enumerator} must be {int(value)}\");")
     out.append("")
     for index, fn in enumerate(data["function"]):
-        numbers = [a for a in fn["args"] if a["kind"] != "table"]
-        tables = len(fn["args"]) - len(numbers)
+        numbers = [a for a in fn["args"] if a["kind"] not in WHOLE_KINDS]
+        whole = len(fn["args"]) - len(numbers)
         members = [f"        {cxx_arg_type(a)} {a['name']};" for a in numbers]
         conversions = [f"static_cast<{a['enum']}>(a[{k}])" if cxx_arg_type(a) != "double" else f"a[{k}]"
                        for k, a in enumerate(numbers)]
@@ -287,7 +292,7 @@ def gen_args(data):
         out += [f"struct {fn['name']} {{",
                 f"    static constexpr std::size_t index = {index};",
                 f"    static constexpr const char* name = {cxx_string(fn['name'])};",
-                f"    static constexpr std::size_t table_count = {tables};",
+                f"    static constexpr std::size_t whole_count = {whole};  // arguments passed whole (tables, raw values)",
                 "    struct Args {"] + members + [
                 f"        static Args from([[maybe_unused]] const double* {from_param or 'a'}) {{ return {{{', '.join(conversions)}}}; }}",
                 "    };",

@@ -9,7 +9,9 @@
 
 namespace coilwright::sheet {
 
-enum class ArgKind { Number, Gauge, Choice, Table };
+// Table and Raw arguments reach the implementation whole (a coil table; any value or range);
+// the others are numbers, broadcast element by element.
+enum class ArgKind { Number, Gauge, Choice, Table, Raw };
 
 // One accepted text of a "choice" argument (lower case) and the number it converts to.
 struct Choice {

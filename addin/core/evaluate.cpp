@@ -232,7 +232,7 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
         if (arg->form == Arg::Form::Missing) {
             if (!as.optional)
                 return CallResult::failure(CellError::IllegalArgument, std::string(as.name) + " is required");
-            if (as.kind == ArgKind::Table) {
+            if (as.kind == ArgKind::Table || as.kind == ArgKind::Raw) {
                 tables.push_back(arg);
                 continue;
             }
@@ -240,7 +240,7 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
                                                           : Arg::number(as.default_value));
             arg = &defaults.back();
         }
-        if (as.kind == ArgKind::Table) {
+        if (as.kind == ArgKind::Table || as.kind == ArgKind::Raw) {
             tables.push_back(arg);
             continue;
         }

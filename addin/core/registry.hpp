@@ -63,7 +63,7 @@ using ImplementFn = Implementation (*)();
 // (optional) computes arrays faster.
 template <class Fn, class F>
 Implementation numeric(F f, double cost = work::kLoopField, BatchFn batch = {}) {
-    static_assert(Fn::table_count == 0, "numeric() is for functions without table arguments");
+    static_assert(Fn::whole_count == 0, "numeric() is for functions whose arguments are all numbers");
     ElementFn fn = [f](const double* a) { return f(Fn::Args::from(a)); };
     ElementFn plain = fn;
     return {Fn::name,

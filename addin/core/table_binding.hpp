@@ -15,7 +15,7 @@ namespace coilwright::sheet {
 // evaluations (the call layer refuses calls whose total work is too large).
 template <class Fn, class F, class Cost>
 Implementation on_coil_table(F per_element, Cost cost_of) {
-    static_assert(Fn::table_count == 1, "on_coil_table() is for functions with one table argument");
+    static_assert(Fn::whole_count == 1, "on_coil_table() is for functions with one table argument");
     return prepared<Fn>([per_element, cost_of](std::span<const Arg* const> tables) {
         auto table = std::make_shared<const CoilTable>(read_coil_table(*tables[0]));
         const double cost = cost_of(*table);

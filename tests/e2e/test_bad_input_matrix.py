@@ -7,7 +7,10 @@ an error from another cell, an overflowing expression, a NaN-producing expressio
 the valid call gives a number (or text for a text function); every bad variant gives an error
 cell, never a number; ranges of mismatched shapes, ranges with blanks, text and errors, and huge
 ranges give errors (or are computed) without hanging; LibreOffice stays up; and the valid call
-afterwards gives exactly the same value. A catalogue function without cases FAILS the run, so a
+afterwards gives exactly the same value; and CALL_CHECK with the same arguments gives the reason
+in words (a bad value of one argument: a reason that names that argument), or the same error
+cell where Calc refuses the arguments before any add-in sees them (an error in a referenced
+cell, an overflowing expression). A catalogue function without cases FAILS the run, so a
 new function cannot slip through. Many formulas go into one sheet per function and are
 calculated together, so the whole matrix costs one LibreOffice start.
 
@@ -82,6 +85,8 @@ def scalar_variants(fn, case, name=None, bind=list):
     required = sum(1 for a in args if "default" not in a)
     for i, arg in enumerate(args):
         values = list(GENERIC_BAD)
+        if arg["kind"] == "raw":  # passed on whole: CALL_CHECK's arguments are checked by its callee
+            continue
         if arg["kind"] == "gauge":  # "1" is a valid gauge written as text
             values = [v for v in values if v[0] != "number as text"]
         if "default" not in arg:
@@ -90,12 +95,25 @@ def scalar_variants(fn, case, name=None, bind=list):
         for label, value in values:
             substituted = list(good)
             substituted[i] = value
-            out.append((f"{arg['name']}: {label}", call(name, bind(substituted))))
+            out.append((f"{arg['name']}: {label}", call(name, bind(substituted)), arg["name"]))
     for k in range(required):
-        out.append((f"call cut short after {k} arguments", call(name, bind(good[:k]))))
+        out.append((f"call cut short after {k} arguments", call(name, bind(good[:k])), None))
     for bad in case.get("bad_calls", []):
-        out.append(("bad call", call(name, bind(bad))))
+        out.append(("bad call", call(name, bind(bad)), None))
     return out
+
+
+def words_of(arg_name):
+    """How a reason may name an argument: its name, its words ("innerRadius": "inner radius"),
+    or its last word ("radius")."""
+    words = "".join(" " + c.lower() if c.isupper() else c for c in arg_name.rstrip("0123456789")).split()
+    return {arg_name.lower(), " ".join(words), words[-1]}
+
+
+def reason_formula(formula):
+    """The CALL_CHECK formula for a call typed as =NAME(args)."""
+    name, rest = formula[1:].split("(", 1)
+    return f'=CALL_CHECK("{name}"' + (";" + rest if rest != ")" else ")")
 
 
 def table_mutations(table):
@@ -178,15 +196,25 @@ class BadInputMatrix(CalcTestCase):
                 bind = lambda args: tables.bind(fn, by_reference, args)  # noqa: E731
                 good = call(name, bind(case["good"]))
                 variants = scalar_variants(fn, case, name, bind)
-                self.put_formulas(sheet, 0, [good] + [f for _, f in variants])
+                self.put_formulas(sheet, 0, [good] + [f for _, f, _ in variants])
+                explain = not case.get("text") and fn["name"] != "CALL_CHECK"
+                if explain:
+                    self.put_formulas(sheet, 2, [reason_formula(good)] + [reason_formula(f) for _, f, _ in variants])
                 first = self.outcome(sheet.getCellByPosition(0, 0))
                 self.check_good(fn, case, first, good)
-                silent = []
-                for row, (label, formula) in enumerate(variants, start=1):
+                silent, unexplained = [], []
+                for row, (label, formula, arg_name) in enumerate(variants, start=1):
                     got = self.outcome(sheet.getCellByPosition(0, row))
                     if got[0] != "error":
                         silent.append(f"{label}: {formula} gave {got}")
+                    elif explain:
+                        problem = self.reason_problem(got, self.outcome(sheet.getCellByPosition(2, row)), arg_name)
+                        if problem:
+                            unexplained.append(f"{label}: {formula}: {problem}")
                 self.assertEqual(silent, [], f"{name}: bad input gave a value instead of an error cell")
+                self.assertEqual(unexplained, [], f"{name}: CALL_CHECK does not explain the error")
+                if explain:
+                    self.assertTrue(self.outcome(sheet.getCellByPosition(2, 0))[1].startswith("OK: "))
                 self.assertTrue(self.session.alive(), f"LibreOffice died on {name}")
                 after = sheet.getCellByPosition(1, 0)
                 after.setFormula(good)
@@ -194,6 +222,22 @@ class BadInputMatrix(CalcTestCase):
                 total += len(variants)
         print(f"\nbad-input matrix: {total} bad formulas over {len(list(callables(self.catalogue)))} functions "
               f"in {time.time() - start:.1f} s", flush=True)
+
+    @staticmethod
+    def reason_problem(error, reason, arg_name):
+        """What is wrong with CALL_CHECK's reason for a call that gave `error`, or None."""
+        if reason[0] == "error":
+            # Calc refused the arguments before calling the add-in: CALL_CHECK meets the same.
+            return None if reason == error else f"CALL_CHECK gave {reason} for {error}"
+        text = reason[1]
+        code = {502: "Err:502", 523: "Err:523", 519: "#VALUE!"}.get(error[1])
+        if code is None:
+            return f"the call gave {error}, which the add-in never returns"
+        if not text.startswith(code + ": ") or len(text) < len(code) + 12:
+            return f"reason {text!r} for {code}"
+        if arg_name is not None and not any(w in text.lower() for w in words_of(arg_name)):
+            return f"reason {text!r} does not name {arg_name}"
+        return None
 
     # --- ranges: shapes, blanks, text, errors, tables ------------------------------------------
     def test_ranges_of_mismatched_shape_blanks_text_and_errors(self):
@@ -211,7 +255,7 @@ class BadInputMatrix(CalcTestCase):
         good_cell = sheet.getCellByPosition(0, 0)
         good_cell.setFormula(call(name, good))
         want = self.outcome(good_cell)
-        numeric = [i for i, a in enumerate(fn["args"]) if a["kind"] != "table"]
+        numeric = [i for i, a in enumerate(fn["args"]) if a["kind"] not in ("table", "raw")]
         column = 2
         # Two numeric arguments as rows of 2 and 3 elements: shapes that do not broadcast.
         if len(numeric) >= 2 and not case.get("text"):
@@ -324,7 +368,7 @@ class BadInputMatrix(CalcTestCase):
         tables = TableCells(self.sheet)
         for name, fn, by_reference in callables(self.catalogue):
             case = self.cases.get(fn["name"])
-            numeric = [i for i, a in enumerate(fn["args"]) if a["kind"] != "table"]
+            numeric = [i for i, a in enumerate(fn["args"]) if a["kind"] not in ("table", "raw")]
             if case is None or len(numeric) < 2 or case.get("text"):
                 continue
             with self.subTest(function=name):

@@ -1,18 +1,22 @@
-// libFuzzer harness for the engine's entry points. Each entry point takes its arguments from
-// the fuzzer's bytes and must either return finite numbers or throw one of the engine's
-// documented errors (DomainError, SingularPointError, ConvergenceError). Anything else, an
-// uncaught exception, a non-finite result, a sanitizer report or a hang, is a finding.
-// To cover a new entry point, add one line to kEntryPoints.
+// libFuzzer harness for the engine's public entry points (every function the public headers
+// declare; tests/fuzz/check_fuzz_coverage.py fails when one is missing here). Each takes its
+// arguments from the fuzzer's bytes and must either return finite numbers or throw one of the
+// engine's own errors (DomainError, SingularPointError, ConvergenceError). Anything else, an
+// uncaught exception, a non-finite result, a sanitizer report or a hang (-timeout), is a
+// finding. Numbers come from fuzz_input.hpp: raw bits, edge values from 1e-310 to 1e308 and
+// values one ulp to a few per cent from an earlier one.
 #include <cmath>
 #include <cstdio>
 #include <cstdlib>
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "coilwright/ac.hpp"
-#include "coilwright/coil_table.hpp"
+#include "coilwright/design.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "coilwright/inductance.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
 #include "numerics/bulirsch_cel.hpp"
@@ -22,105 +26,205 @@ using coilwright::fuzz::FuzzInput;
 
 namespace {
 
-void require_finite(double v, const char* what) {
+void finite(double v, const char* what) {
     if (!std::isfinite(v)) {
         std::fprintf(stderr, "%s returned a non-finite value %g\n", what, v);
         std::abort();
     }
 }
 
+void finite(const FieldRZ& f, const char* what) {
+    finite(f.bz, what);
+    finite(f.br, what);
+}
+
+void finite(const Eigen::Vector3d& b, const char* what) {
+    for (int k = 0; k < 3; ++k) finite(b[k], what);
+}
+
+void finite(const CoilTable& t, const char* what) {
+    for (const CoilRow& row : t.rows())
+        for (double v : {row.inner_radius, row.outer_radius, row.length, row.centre_z, row.turns, row.current})
+            finite(v, what);
+}
+
+void finite(const MatrixWithProblems& m, const char* what) {
+    for (Eigen::Index i = 0; i < m.values.rows(); ++i)
+        for (Eigen::Index j = 0; j < m.values.cols(); ++j)
+            if (m.valid(i, j)) finite(m.values(i, j), what);
+}
+
+void finite(const HotState& s, const char* what) {
+    finite(s.temperature, what);
+    finite(s.resistance, what);
+}
+
+void finite(const std::vector<double>& v, const char* what) {
+    for (double x : v) finite(x, what);
+}
+
+// A table of one to three rows (bigger tables only cost time, not coverage).
+CoilTable table(FuzzInput& in) {
+    std::vector<CoilRow> rows(1 + in.below(3));
+    for (auto& row : rows) row = {in.number(), in.number(), in.number(), in.number(), in.number(), in.number()};
+    return CoilTable(rows);
+}
+
+CoilSection section(FuzzInput& in) { return {in.number(), in.number(), in.number()}; }
+Conductor conductor(FuzzInput& in) { return static_cast<Conductor>(in.below(3)); }  // 2 names none
+Packing packing(FuzzInput& in) { return static_cast<Packing>(in.below(3)); }
+CoilParameter parameter(FuzzInput& in) { return static_cast<CoilParameter>(in.below(8)); }
+std::size_t row_index(FuzzInput& in) { return in.below(4); }
+Eigen::Vector3d point(FuzzInput& in) { return {in.number(), in.number(), in.number()}; }
+
 struct EntryPoint {
     const char* name;
     void (*run)(FuzzInput&);
 };
 
+#define ENTRY(name, body) {#name, [](FuzzInput& in) { body; }}
+#define N in.number()
+
 const EntryPoint kEntryPoints[] = {
-    {"loop_field",
-     [](FuzzInput& in) {
-         const LoopSpec loop{in.number(), in.number(), in.number()};
-         const double z = in.number(), r = in.number();
-         const FieldRZ f = loop_field(loop, z, r);
-         require_finite(f.bz, "loop_field Bz");
-         require_finite(f.br, "loop_field Br");
-         require_finite(f.magnitude(), "loop_field |B|");
-     }},
-    {"cel",
-     [](FuzzInput& in) {
-         // Documented domain: p > 0 and kc != 0, all finite. Inside it the iteration must end;
-         // the value may legitimately overflow for extreme a, b.
-         const double kc = in.number(), p = in.number(), a = in.number(), b = in.number();
-         if (!(std::isfinite(kc) && kc != 0.0 && std::isfinite(p) && p > 0.0 && std::isfinite(a) && std::isfinite(b)))
-             return;
-         (void)internal::cel(kc, p, a, b);
-     }},
-    {"parse_awg_gauge",
-     [](FuzzInput& in) {
-         const double g = parse_awg_gauge(in.text());
-         require_finite(g, "parse_awg_gauge");
-         require_finite(awg_diameter(g), "awg_diameter");
-     }},
-    {"awg_diameter", [](FuzzInput& in) { require_finite(awg_diameter(in.number()), "awg_diameter"); }},
-    {"coil_table",
-     [](FuzzInput& in) {
-         std::vector<CoilRow> rows(in.below(4));
-         for (auto& row : rows) row = {in.number(), in.number(), in.number(), in.number(), in.number(), in.number()};
-         const CoilTable table(rows);
-         for (const auto& row : table.rows()) (void)row.kind();
-     }},
-    // Coils at a frequency (coilwright/ac.hpp); the conductor drawn from the two materials.
-    {"skin_depth",
-     [](FuzzInput& in) {
-         const double f = in.number();
-         require_finite(skin_depth(f, static_cast<Conductor>(in.below(2)), in.number()), "skin_depth");
-     }},
-    {"wire_rac_ratio",
-     [](FuzzInput& in) {
-         const double d = in.number(), f = in.number();
-         require_finite(wire_rac_ratio(d, f, static_cast<Conductor>(in.below(2)), in.number()), "wire_rac_ratio");
-     }},
-    {"dowell_factor", [](FuzzInput& in) { require_finite(dowell_factor(in.number(), in.number()), "dowell_factor"); }},
-    {"coil_rac_ratio",
-     [](FuzzInput& in) {
-         const double d = in.number(), w = in.number(), f = in.number(), m = in.number(), n = in.number();
-         require_finite(coil_rac_ratio(d, w, f, m, n, static_cast<Conductor>(in.below(2)), in.number()),
-                        "coil_rac_ratio");
-     }},
-    {"coil_self_capacitance",
-     [](FuzzInput& in) {
-         const double ri = in.number(), l = in.number(), n = in.number(), m = in.number(), dc = in.number(),
-                      d_o = in.number(), er = in.number();
-         require_finite(coil_self_capacitance(ri, l, n, m, dc, d_o, er), "coil_self_capacitance");
-     }},
-    {"coil_srf", [](FuzzInput& in) { require_finite(coil_srf(in.number(), in.number()), "coil_srf"); }},
-    {"coil_impedance",
-     [](FuzzInput& in) {
-         const double r = in.number(), l = in.number(), f = in.number(), c = in.number();
-         const Impedance z = coil_impedance(r, l, f, c);
-         require_finite(z.magnitude, "coil_impedance |Z|");
-         require_finite(z.phase, "coil_impedance phase");
-     }},
-    {"coil_voltage_ac",
-     [](FuzzInput& in) {
-         const double r = in.number(), l = in.number(), f = in.number(), i = in.number();
-         require_finite(coil_voltage_ac(r, l, f, i), "coil_voltage_ac");
-     }},
-    {"resonance",
-     [](FuzzInput& in) {
-         const double i = in.number(), l = in.number(), f = in.number();
-         require_finite(resonance_capacitance(l, f), "resonance_capacitance");
-         require_finite(resonance_cap_voltage(i, l, f), "resonance_cap_voltage");
-     }},
-    {"pickup",
-     [](FuzzInput& in) {
-         const double n = in.number(), a = in.number(), f = in.number(), b = in.number(), r = in.number(),
-                      l = in.number(), c = in.number(), t = in.number(), ea = in.number();
-         require_finite(pickup_emf(n, a, f, b), "pickup_emf");
-         require_finite(pickup_area(a, b, r, n), "pickup_area");
-         require_finite(pickup_sensitivity(n, a, f, r, l, c), "pickup_sensitivity");
-         require_finite(johnson_noise(r, t, b), "johnson_noise");
-         require_finite(pickup_nef(n, a, f, r, t, l, c, ea), "pickup_nef");
-     }},
+    // field
+    ENTRY(loop_field, finite(loop_field({N, N, N}, N, N), "loop_field")),
+    ENTRY(loop_field_batch, {
+        const LoopSpec loop{N, N, N};
+        const double z[3] = {N, N, N}, r[3] = {N, N, N};
+        double bz[3], br[3];
+        loop_field_batch(loop, z, r, 3, bz, br);
+        for (int i = 0; i < 3; ++i)
+            if (!std::isnan(bz[i])) finite(bz[i], "loop_field_batch");
+    }),
+    ENTRY(add_loop_field_batch, {
+        const LoopSpec loop{N, N, N};
+        const double centre = N, z[2] = {N, N}, r[2] = {N, N};
+        double bz[2] = {0, 0}, br[2] = {0, 0};
+        add_loop_field_batch(loop, centre, z, r, 2, bz, br);
+    }),
+    ENTRY(solenoid_field, finite(solenoid_field({N, N, N, N}, N, N, static_cast<Components>(in.below(3))), "solenoid_field")),
+    ENTRY(thick_coil_field, finite(thick_coil_field({N, N, N, N, N}, N, N, static_cast<Components>(in.below(3))), "thick_coil_field")),
+    ENTRY(flat_spiral_field, finite(flat_spiral_field({N, N, N, N}, N, N), "flat_spiral_field")),
+    ENTRY(rect_field, finite(rect_field({N, N, N, N}, point(in)), "rect_field")),
+    ENTRY(rect_pair_field, finite(rect_pair_field({N, N, N, N}, N, point(in)), "rect_pair_field")),
+    ENTRY(validate, {
+        validate(LoopSpec{N, N, N});
+        validate(SolenoidSpec{N, N, N, N});
+        validate(ThickCoilSpec{N, N, N, N, N});
+        validate(FlatSpiralSpec{N, N, N, N});
+        validate(RectSpec{N, N, N, N});
+        validate(section(in), "coil ");
+        validate(CoilRow{N, N, N, N, N, N}, 1);
+    }),
+    ENTRY(table_field, finite(table_field(table(in), N, N), "table_field")),
+    ENTRY(row_field, finite(row_field({N, N, N, N, N, N}, N, N), "row_field")),
+    ENTRY(axial_field, finite(axial_field(table(in), N), "axial_field")),
+    ENTRY(axial_derivatives, finite(axial_derivatives(table(in), N, static_cast<int>(in.below(16)) - 1), "axial_derivatives")),
+    ENTRY(table_gradient, finite(table_gradient(table(in), N, N), "table_gradient")),
+    // inductance
+    ENTRY(loop_mutual_inductance, finite(loop_mutual_inductance(N, N, N), "loop_mutual_inductance")),
+    ENTRY(loop_mutual_inductance_slope, finite(loop_mutual_inductance_slope(N, N, N), "loop_mutual_inductance_slope")),
+    ENTRY(coil_mutual_inductance, finite(coil_mutual_inductance(section(in), section(in), N), "coil_mutual_inductance")),
+    ENTRY(coil_mutual_inductance_slope, finite(coil_mutual_inductance_slope(section(in), section(in), N), "coil_mutual_inductance_slope")),
+    ENTRY(loop_self_inductance, finite(loop_self_inductance(N, N, N), "loop_self_inductance")),
+    ENTRY(solenoid_inductance, finite(solenoid_inductance(N, N, N), "solenoid_inductance")),
+    ENTRY(nagaoka_coefficient, finite(nagaoka_coefficient(N), "nagaoka_coefficient")),
+    ENTRY(solenoid_inductance_radius_slope, finite(solenoid_inductance_radius_slope(N, N, N), "solenoid_inductance_radius_slope")),
+    ENTRY(solenoid_mean_pressure, finite(solenoid_mean_pressure(N, N, N, N), "solenoid_mean_pressure")),
+    ENTRY(coil_self_inductance, {
+        const CoilSection s = section(in);
+        finite(in.below(2) ? coil_self_inductance(s) : coil_self_inductance(s, N), "coil_self_inductance");
+    }),
+    ENTRY(loop_coupling, finite(loop_coupling(N, N, N, N, N), "loop_coupling")),
+    ENTRY(coil_coupling, finite(coil_coupling(section(in), section(in), N), "coil_coupling")),
+    ENTRY(loop_axial_force, finite(loop_axial_force(N, N, N, N, N, N, N), "loop_axial_force")),
+    ENTRY(coil_axial_force, finite(coil_axial_force(section(in), N, N, section(in), N, N, N), "coil_axial_force")),
+    ENTRY(optional_wire_diameter, { const auto d = optional_wire_diameter(N); if (d) finite(*d, "optional_wire_diameter"); }),
+    ENTRY(inductance_matrix, finite(inductance_matrix(table(in), optional_wire_diameter(in.below(2) ? N : 0.0)), "inductance_matrix")),
+    ENTRY(series_inductance, finite(series_inductance(table(in), optional_wire_diameter(in.below(2) ? N : 0.0)), "series_inductance")),
+    ENTRY(stored_energy, finite(stored_energy(table(in), optional_wire_diameter(in.below(2) ? N : 0.0)), "stored_energy")),
+    ENTRY(axial_forces, finite(axial_forces(table(in)), "axial_forces")),
+    // design
+    ENTRY(flat_pair_spacing, finite(flat_pair_spacing(section(in)), "flat_pair_spacing")),
+    ENTRY(gradient_pair_spacing, finite(gradient_pair_spacing(section(in)), "gradient_pair_spacing")),
+    ENTRY(pair_centre_field, finite(pair_centre_field(section(in), N, N, N), "pair_centre_field")),
+    ENTRY(gradient_pair_gradient, finite(gradient_pair_gradient(section(in), N, N, N), "gradient_pair_gradient")),
+    ENTRY(helmholtz_centre_field, finite(helmholtz_centre_field(N, N, N), "helmholtz_centre_field")),
+    ENTRY(rect_pair_spacing, finite(rect_pair_spacing(N, N), "rect_pair_spacing")),
+    ENTRY(flat_pair_table, finite(flat_pair_table(section(in), N, N), "flat_pair_table")),
+    ENTRY(gradient_pair_table, finite(gradient_pair_table(section(in), N, N), "gradient_pair_table")),
+    ENTRY(maxwell_table, finite(maxwell_table(N, N, N), "maxwell_table")),
+    ENTRY(axial_uniform_half_length, finite(axial_uniform_half_length(table(in), N, N), "axial_uniform_half_length")),
+    ENTRY(axial_linear_half_length, finite(axial_linear_half_length(table(in), N, N), "axial_linear_half_length")),
+    ENTRY(radial_uniform_extent, finite(radial_uniform_extent(table(in), N, N), "radial_uniform_extent")),
+    ENTRY(spherical_uniform_radius, finite(spherical_uniform_radius(table(in), N, N), "spherical_uniform_radius")),
+    ENTRY(scale_for_field, finite(scale_for_field(table(in), N, N, N), "scale_for_field")),
+    ENTRY(scale_for_gradient, finite(scale_for_gradient(table(in), N, N, N), "scale_for_gradient")),
+    ENTRY(field_sensitivity, finite(field_sensitivity(table(in), row_index(in), parameter(in), N), "field_sensitivity")),
+    ENTRY(uniform_length_sensitivity, finite(uniform_length_sensitivity(table(in), row_index(in), parameter(in), N, N), "uniform_length_sensitivity")),
+    ENTRY(sensitivity, finite(sensitivity(table(in), row_index(in), parameter(in), static_cast<SensitivityQuantity>(in.below(3)), N, N), "sensitivity")),
+    ENTRY(perturbed, finite(perturbed(table(in), row_index(in), parameter(in), N), "perturbed")),
+    // wire
+    ENTRY(parse_awg_gauge, finite(parse_awg_gauge(in.text()), "parse_awg_gauge")),
+    ENTRY(awg_diameter, finite(awg_diameter(N), "awg_diameter")),
+    ENTRY(conductor_data, finite(conductor_data(conductor(in)).resistivity_20, "conductor_data")),
+    ENTRY(resistivity, finite(resistivity(conductor(in), N), "resistivity")),
+    ENTRY(wire_area, finite(wire_area(N), "wire_area")),
+    ENTRY(wire_resistance, finite(wire_resistance(N, N, conductor(in), N), "wire_resistance")),
+    ENTRY(wire_mass, finite(wire_mass(N, N, conductor(in)), "wire_mass")),
+    ENTRY(wire_diameter_for_current, finite(wire_diameter_for_current(N, N), "wire_diameter_for_current")),
+    ENTRY(winding_layers, finite(winding_layers(N, N, packing(in)), "winding_layers")),
+    ENTRY(winding_turns_per_layer, finite(winding_turns_per_layer(N, N), "winding_turns_per_layer")),
+    ENTRY(winding_turns, finite(winding_turns(N, N, N, packing(in)), "winding_turns")),
+    ENTRY(winding_build, finite(winding_build(N, N, N, packing(in)), "winding_build")),
+    ENTRY(winding_wire_length, finite(winding_wire_length(N, N, N, N, packing(in)), "winding_wire_length")),
+    ENTRY(winding_fill, finite(winding_fill(N, N, N, N), "winding_fill")),
+    ENTRY(winding_mean_turn, finite(winding_mean_turn(N, N), "winding_mean_turn")),
+    ENTRY(winding_mean_turn_rect, finite(winding_mean_turn_rect(N, N, N), "winding_mean_turn_rect")),
+    ENTRY(coil_resistance, finite(coil_resistance(N, N, N, conductor(in), N), "coil_resistance")),
+    ENTRY(coil_voltage, finite(coil_voltage(N, N), "coil_voltage")),
+    ENTRY(coil_power, finite(coil_power(N, N), "coil_power")),
+    ENTRY(coil_current_density, finite(coil_current_density(N, N), "coil_current_density")),
+    ENTRY(coil_cooling_area, finite(coil_cooling_area(N, N, N), "coil_cooling_area")),
+    ENTRY(coil_cooling_area_rect, finite(coil_cooling_area_rect(N, N, N, N), "coil_cooling_area_rect")),
+    ENTRY(coil_temperature_rise, finite(coil_temperature_rise(N, N, N), "coil_temperature_rise")),
+    ENTRY(hot_state_at_current, finite(hot_state_at_current(N, N, N, N, N, conductor(in)), "hot_state_at_current")),
+    ENTRY(hot_state_at_voltage, finite(hot_state_at_voltage(N, N, N, N, N, conductor(in)), "hot_state_at_voltage")),
+    ENTRY(coil_max_current, finite(coil_max_current(N, N, N, N, N, conductor(in)), "coil_max_current")),
+    ENTRY(insulation_class_limit, finite(insulation_class_limit(N), "insulation_class_limit")),
+    ENTRY(insulation_margin, finite(insulation_margin(N, N, N), "insulation_margin")),
+    ENTRY(coil_energy, finite(coil_energy(N, N), "coil_energy")),
+    ENTRY(coil_time_constant, finite(coil_time_constant(N, N), "coil_time_constant")),
+    // ac
+    ENTRY(skin_depth, finite(skin_depth(N, conductor(in), N), "skin_depth")),
+    ENTRY(wire_rac_ratio, finite(wire_rac_ratio(N, N, conductor(in), N), "wire_rac_ratio")),
+    ENTRY(dowell_factor, finite(dowell_factor(N, N), "dowell_factor")),
+    ENTRY(coil_rac_ratio, finite(coil_rac_ratio(N, N, N, N, N, conductor(in), N), "coil_rac_ratio")),
+    ENTRY(coil_self_capacitance, finite(coil_self_capacitance(N, N, N, N, N, N, N), "coil_self_capacitance")),
+    ENTRY(coil_srf, finite(coil_srf(N, N), "coil_srf")),
+    ENTRY(coil_impedance, {
+        const Impedance z = coil_impedance(N, N, N, N);
+        finite(z.magnitude, "coil_impedance |Z|");
+        finite(z.phase, "coil_impedance phase");
+    }),
+    ENTRY(coil_voltage_ac, finite(coil_voltage_ac(N, N, N, N), "coil_voltage_ac")),
+    ENTRY(resonance_capacitance, finite(resonance_capacitance(N, N), "resonance_capacitance")),
+    ENTRY(resonance_cap_voltage, finite(resonance_cap_voltage(N, N, N), "resonance_cap_voltage")),
+    ENTRY(pickup_emf, finite(pickup_emf(N, N, N, N), "pickup_emf")),
+    ENTRY(pickup_area, finite(pickup_area(N, N, N, N), "pickup_area")),
+    ENTRY(pickup_sensitivity, finite(pickup_sensitivity(N, N, N, N, N, N), "pickup_sensitivity")),
+    ENTRY(johnson_noise, finite(johnson_noise(N, N, N), "johnson_noise")),
+    ENTRY(pickup_nef, finite(pickup_nef(N, N, N, N, N, N, N, N), "pickup_nef")),
+    // the engine's own numerics, in their documented domain (p > 0, kc != 0, all finite)
+    ENTRY(cel, {
+        const double kc = N, p = N, a = N, b = N;
+        if (std::isfinite(kc) && kc != 0.0 && std::isfinite(p) && p > 0.0 && std::isfinite(a) && std::isfinite(b))
+            (void)internal::cel(kc, p, a, b);
+    }),
 };
+
+#undef N
+#undef ENTRY
 
 }  // namespace
 
@@ -129,7 +233,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     const EntryPoint& entry = kEntryPoints[in.below(std::size(kEntryPoints))];
     try {
         entry.run(in);
-    } catch (const DomainError&) {       // also SingularPointError
+    } catch (const DomainError&) {  // also SingularPointError
     } catch (const ConvergenceError&) {
     }
     return 0;
