@@ -82,7 +82,7 @@ struct EntryPoint {
     void (*run)(FuzzInput&);
 };
 
-#define ENTRY(name, body) {#name, [](FuzzInput& in) { body; }}
+#define ENTRY(name, ...) {#name, [](FuzzInput& in) { __VA_ARGS__; }}
 #define N in.number()
 
 const EntryPoint kEntryPoints[] = {
