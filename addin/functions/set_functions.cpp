@@ -70,47 +70,43 @@ std::size_t index_of_label(const CoilSet& set, double label) {
     throw DomainError("row " + std::to_string(label) + " is not a coil row of the set (blank, or outside it)");
 }
 
-// The numbers of a table-kind argument (all its cells, row by row); a missing one is `fallback`.
-std::vector<double> numbers_of(const Arg& arg, const char* name, double fallback) {
-    if (arg.form == Arg::Form::Missing) return {fallback};
+// The numbers of a range of points (all its cells, row by row, entirely blank rows skipped); a
+// missing argument is the single value 0.
+std::vector<double> point_coordinates(const Arg& arg, const char* name) {
+    if (arg.form == Arg::Form::Missing) return {0.0};
     std::vector<double> out;
-    for (std::size_t r = 0; r < arg.rows; ++r)
+    for (std::size_t r = 0; r < arg.rows; ++r) {
+        bool blank = true;
+        for (std::size_t c = 0; c < arg.cols; ++c) blank = blank && arg.at(r, c).kind == CellKind::Empty;
+        if (blank) continue;
         for (std::size_t c = 0; c < arg.cols; ++c) {
             const Cell& cell = arg.at(r, c);
             if (cell.kind != CellKind::Number)
-                throw DomainError(std::string(name) + (cell.kind == CellKind::Empty ? " has a blank cell" : " has text where a number is needed"));
+                throw DomainError(std::string(name) + (cell.kind == CellKind::Empty ? " has a blank cell"
+                                                                                  : " has text where a number is needed"));
             out.push_back(cell.number);
         }
-    if (out.empty()) throw DomainError(std::string(name) + " is empty");
+    }
+    if (out.empty()) throw DomainError(std::string(name) + " has no numbers");
     return out;
 }
 
 Implementation currents() {
     return {"SET_CURRENTS", [](std::span<const Arg* const> tables) {
-                const CoilSet set = read_coil_set(*tables[0]);
-                const char* names[6] = {"bx", "by", "bz", "x", "y", "z"};
-                std::vector<double> v[6];
-                std::size_t n = 1;
-                for (int k = 0; k < 6; ++k) {
-                    v[k] = numbers_of(*tables[1 + k], names[k], 0.0);
-                    if (v[k].size() == 1) continue;
-                    if (n != 1 && v[k].size() != n)
-                        throw DomainError(std::string(names[k]) + " has " + std::to_string(v[k].size()) +
-                                          " values, the other ranges " + std::to_string(n) +
-                                          ": give one value per point, or a single value");
-                    n = v[k].size();
-                }
-                if (n > 10000) throw DomainError("at most 10000 points");
-                std::vector<Eigen::Vector3d> points, targets;
-                const auto at = [&](int k, std::size_t i) { return v[k].size() == 1 ? v[k][0] : v[k][i]; };
-                for (std::size_t i = 0; i < n; ++i) {
-                    targets.emplace_back(at(0, i), at(1, i), at(2, i));
-                    points.emplace_back(at(3, i), at(4, i), at(5, i));
-                }
-                const Eigen::VectorXd i = set_currents(set, points, targets);
+                const auto set = std::make_shared<const CoilSet>(read_coil_set(*tables[0]));
+                const std::vector<double> x = point_coordinates(*tables[1], "x"), y = point_coordinates(*tables[2], "y"),
+                                          z = point_coordinates(*tables[3], "z");
+                if (y.size() != x.size() || z.size() != x.size())
+                    throw DomainError("x, y and z must have one value per point: they have " + std::to_string(x.size()) +
+                                      ", " + std::to_string(y.size()) + " and " + std::to_string(z.size()));
+                if (x.size() > 10000) throw DomainError("at most 10000 points");
+                std::vector<Eigen::Vector3d> points;
+                for (std::size_t i = 0; i < x.size(); ++i) points.emplace_back(x[i], y[i], z[i]);
                 Prepared p;
-                p.cost = 1.0;
-                p.shaped = [i](const double*) {
+                p.cost = set_point_cost(*set) * static_cast<double>(points.size());
+                p.shaped = [set, points](const double* a) {
+                    const std::vector<Eigen::Vector3d> targets(points.size(), Eigen::Vector3d(a[0], a[1], a[2]));
+                    const Eigen::VectorXd i = set_currents(*set, points, targets);
                     CallResult r;
                     r.rows = static_cast<std::size_t>(i.size());
                     r.cols = 1;

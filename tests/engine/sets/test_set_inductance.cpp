@@ -78,7 +78,8 @@ TEST(SetInductance, MpmathNeumannReference) {
 // - a asinh(a / sqrt(a^2 + d^2)) - 2 sqrt(a^2 + d^2) + sqrt(2a^2 + d^2) + d] (F. W. Grover,
 // Inductance Calculations, 1946, ch. 16: parallel sides' partial mutual inductances).
 TEST(SetInductance, GroverParallelSquares) {
-    for (double d : {0.01, 0.2, 1.0, 5.0}) {
+    // (Beyond d = a the closed form itself cancels: its terms are of order a, M of order a^4/d^3.)
+    for (double d : {0.01, 0.2, 0.5}) {
         const double a = 0.5;
         const double sq = std::sqrt(a * a + d * d);
         const double grover = 2.0 * kMu0 / kPi *
