@@ -31,6 +31,35 @@ inline Eigen::Vector3d circle_local(double lx, double ly, double r, double bz, d
     return {s * lx, s * ly, bz};
 }
 
+// True when the frame's axes are coordinate axes (up to sign): local coordinates are then exact
+// but for the subtraction of the centre, as in the coaxial functions.
+inline bool axis_aligned(const CoilFrame& f) {
+    const auto unit = [](const Eigen::Vector3d& a) {
+        int ones = 0;
+        for (int k = 0; k < 3; ++k) {
+            if (std::fabs(a[k]) == 1.0) ++ones;
+            else if (a[k] != 0.0) return false;
+        }
+        return ones == 1;
+    };
+    return unit(f.u) && unit(f.v) && unit(f.n);
+}
+
+// Distance from a local point to a thin coil's wire (the circle, or the rectangle's perimeter).
+inline double wire_distance(const SetCoil& c, double lx, double ly, double lz, double r) {
+    if (c.shape == SetShape::Circle) return std::hypot(c.size - r, lz);
+    const double ax = std::fabs(lx) - 0.5 * c.size, ay = std::fabs(ly) - 0.5 * c.height;
+    const double in_plane = ax <= 0.0 && ay <= 0.0 ? std::min(-ax, -ay) : std::hypot(std::max(ax, 0.0), std::max(ay, 0.0));
+    return std::hypot(in_plane, lz);
+}
+
+// In a tilted frame the local coordinates carry the rounding of the rotation, a few units in
+// the last place of the coordinates involved: a point that close to the wire is on it (its
+// field would be a number without a single correct digit).
+inline double rounding_radius(const SetCoil& c, const Eigen::Vector3d& point) {
+    return 1e-15 * (point.cwiseAbs().maxCoeff() + c.centre.cwiseAbs().maxCoeff() + c.size + c.height);
+}
+
 // The field of one coil at a local point (u, v, n coordinates relative to its centre), in
 // local components. Throws SingularPointError on a filament or sheet.
 Eigen::Vector3d circle_field_local(const SetCoil& coil, const Eigen::Vector3d& local);

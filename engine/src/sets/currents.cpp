@@ -2,7 +2,6 @@
 // the field is linear in the currents. Solved with Eigen's complete orthogonal decomposition,
 // which also reveals the rank; a rank-deficient or unreachable problem is an error saying why.
 #include <Eigen/QR>
-#include <cstdio>
 #include <cmath>
 #include <string>
 
@@ -29,10 +28,14 @@ Eigen::MatrixXd circuit_field_matrix(const CoilSet& set, const Eigen::Vector3d& 
 
 namespace {
 
+// "12.3 %" (three significant figures are enough to say how far off a target is).
 std::string percent(double fraction) {
-    char buf[32];
-    std::snprintf(buf, sizeof buf, "%.3g %%", 100.0 * fraction);
-    return buf;
+    const double p = 100.0 * fraction;
+    const int digits = p >= 100.0 ? 0 : p >= 10.0 ? 1 : 2;
+    const double scale = std::pow(10.0, digits);
+    std::string text = std::to_string(std::round(p * scale) / scale);
+    text.erase(text.find('.') + (digits == 0 ? 0 : digits + 1));
+    return text + " %";
 }
 
 // Why the columns of `a` (the circuits' fields per ampere) are not independent.

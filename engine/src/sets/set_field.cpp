@@ -18,6 +18,11 @@ using sets_detail::to_global;
 
 Eigen::Vector3d coil_field(const SetCoil& coil, const CoilFrame& frame, const Eigen::Vector3d& point) {
     const Eigen::Vector3d local = frame.to_local(point);
+    if (!coil.thick() && !sets_detail::axis_aligned(frame) &&
+        sets_detail::wire_distance(coil, local.x(), local.y(), local.z(),
+                                   sets_detail::axis_distance(local.x(), local.y())) <=
+            sets_detail::rounding_radius(coil, point))
+        throw SingularPointError("the point lies on the current filament (within the rounding of the tilted coil's frame)");
     const Eigen::Vector3d b = coil.shape == SetShape::Circle ? sets_detail::circle_field_local(coil, local)
                                                              : sets_detail::rect_field_local(coil, local);
     return to_global(frame, b.x(), b.y(), b.z());
@@ -64,6 +69,7 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
         const SetCoil& coil = set.coil(i);
         const CoilFrame& f = set.frame(i);
         const bool loop = coil.shape == SetShape::Circle && !coil.thick();
+        const bool tilted = !sets_detail::axis_aligned(f);
         for (std::size_t start = 0; start < n; start += kChunk) {
             const std::size_t m = std::min(kChunk, n - start);
             if (loop) {
@@ -80,6 +86,13 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
                     std::fill(fz, fz + m, kNaN);
                     std::fill(fr, fr + m, kNaN);
                 }
+                if (tilted)  // as in coil_field: within rounding of the wire is on it
+                    for (std::size_t k = 0; k < m; ++k) {
+                        const Eigen::Vector3d p(x[start + k], y[start + k], z[start + k]);
+                        if (sets_detail::wire_distance(coil, lx[k], ly[k], lz[k], r[k]) <=
+                            sets_detail::rounding_radius(coil, p))
+                            fz[k] = fr[k] = kNaN;
+                    }
                 for (std::size_t k = 0; k < m; ++k) {
                     const Eigen::Vector3d bl = sets_detail::circle_local(lx[k], ly[k], r[k], fz[k], fr[k]);
                     const Eigen::Vector3d b = to_global(f, bl.x(), bl.y(), bl.z());

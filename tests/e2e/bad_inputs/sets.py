@@ -26,7 +26,7 @@ FIELD = {
     "bad": {0: BAD_SETS},
     "bad_calls": [
         ['{"circle";0;0;0;0;0;1;0.1;0;0;10;1}', "0.1", "0", "0"],            # on the circle's wire
-        ['{"circle";0;0;0;1;1;1;0.1;0;0;10;1}', "0", "0", "0.1*SQRT(2/3)"],    # on the tilted circle's wire
+        ['{"circle";0;0;0;1;1;1;0.1;0;0;10;1}', "0.1/SQRT(2)", "-0.1/SQRT(2)", "0"],  # on the tilted circle's wire
         ['{"rect";0;0;0;0;0;1;0.2;0.1;0;10;1}', "0.1", "0", "0"],              # on a side of the rect
         ['{"rect";0;0;0;0;0;1;0.2;0.1;0;10;1}', "0.1", "0.05", "0"],           # on a corner
         ['{"rect";0;0;0;0;0;1;0.2;0.1;0;10;1;1;0;0.02}', "0.1", "0", "0.005"], # on a rectangular sheet

@@ -257,6 +257,13 @@ TEST(SetField, Errors) {
     EXPECT_THROW(set_field(set, {0.1, 0.0, 1.0}), SingularPointError);  // on a side of row 2
     EXPECT_THROW(set_field(set, {0.1, 0.1, 1.0}), SingularPointError);  // a corner
     EXPECT_THROW(set_field(set, {NAN, 0, 0}), DomainError);
+    // A tilted circle: a point typed on its wire is on it within the rounding of the frame.
+    const CoilSet tilted({circle({0, 0, 0}, {1, 1, 1}, 0.1, 1, 1)});
+    EXPECT_THROW(set_field(tilted, {0.1 / std::sqrt(2.0), -0.1 / std::sqrt(2.0), 0.0}), SingularPointError);
+    EXPECT_NO_THROW(set_field(tilted, {0.1 / std::sqrt(2.0) * (1 + 1e-12), -0.1 / std::sqrt(2.0), 0.0}));
+    const CoilSet tilted_rect({rect({0, 0, 0}, {1, 1, 1}, 0.2, 0.1, 0, 1, 1)});
+    const CoilFrame fr = coil_frame({1, 1, 1}, 0, {0, 0, 0});
+    EXPECT_THROW(set_field(tilted_rect, fr.to_global({0.1, 0.01, 0.0})), SingularPointError);
     try {
         CoilSet bad({circle({0, 0, 0}, {0, 0, 0}, 0.1, 1, 1)});
         FAIL();
