@@ -146,8 +146,9 @@ Implementation force_like(const char* name, Eigen::Vector3d (*quantity)(const Co
             const int k = static_cast<int>(a[1]);
             return k < 3 ? f[k] : f.norm();
         },
-        // Line integrals along the turn of the field of every other row (x 16 for a thick row).
-        [](const CoilSet& set) { return 16.0 * 400.0 * set_point_cost(set); });
+        // Line integrals along the turn of the field of every other row (up to 2000 points near
+        // another winding), 16 times for a thick row.
+        [](const CoilSet& set) { return 16.0 * 2000.0 * set_point_cost(set); });
 }
 
 Implementation rig3() {

@@ -13,6 +13,7 @@
 #include "coilwright/coil_table.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/loop.hpp"
+#include "coilwright/sets.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
 
@@ -20,6 +21,27 @@ using namespace coilwright;
 using coilwright::fuzz::FuzzInput;
 
 namespace {
+
+// A coil set of up to three rows from the fuzzer's bytes (shapes, thickness and circuits too).
+CoilSet fuzz_set(FuzzInput& in) {
+    std::vector<SetCoil> coils(1 + in.below(3));
+    for (auto& c : coils) {
+        c.shape = in.below(2) == 0 ? SetShape::Circle : SetShape::Rect;
+        c.centre = {in.number(), in.number(), in.number()};
+        c.axis = {in.number(), in.number(), in.number()};
+        c.size = in.number();
+        c.height = c.shape == SetShape::Rect ? in.number() : 0.0;
+        c.roll_deg = in.number();
+        c.turns = in.number();
+        c.current = in.number();
+        if (in.below(2) == 0) c.circuit = in.number();
+        if (in.below(3) == 0) {
+            c.depth = in.number();
+            c.breadth = in.number();
+        }
+    }
+    return CoilSet(coils);
+}
 
 void require_finite(double v, const char* what) {
     if (!std::isfinite(v)) {
@@ -59,6 +81,44 @@ const EntryPoint kEntryPoints[] = {
          require_finite(awg_diameter(g), "awg_diameter");
      }},
     {"awg_diameter", [](FuzzInput& in) { require_finite(awg_diameter(in.number()), "awg_diameter"); }},
+    {"set_field",
+     [](FuzzInput& in) {
+         const CoilSet set = fuzz_set(in);
+         const Eigen::Vector3d b = set_field(set, {in.number(), in.number(), in.number()});
+         for (int k = 0; k < 3; ++k) require_finite(b[k], "set_field");
+     }},
+    {"set_field_batch",
+     [](FuzzInput& in) {
+         const CoilSet set = fuzz_set(in);
+         double x[3], y[3], z[3], bx[3], by[3], bz[3];
+         for (int i = 0; i < 3; ++i) x[i] = in.number(), y[i] = in.number(), z[i] = in.number();
+         (void)set_field_batch(set, x, y, z, 3, bx, by, bz);  // NaN where set_field would throw
+     }},
+    {"set_currents",
+     [](FuzzInput& in) {
+         const CoilSet set = fuzz_set(in);
+         const Eigen::VectorXd i = set_currents(set, {{in.number(), in.number(), in.number()}},
+                                                {{in.number(), in.number(), in.number()}});
+         for (Eigen::Index k = 0; k < i.size(); ++k) require_finite(i[k], "set_currents");
+     }},
+    {"set_inductance_matrix",
+     [](FuzzInput& in) {
+         const CoilSet set = fuzz_set(in);
+         const Eigen::MatrixXd l = set_inductance_matrix(set, in.number());
+         for (Eigen::Index k = 0; k < l.size(); ++k) require_finite(l.data()[k], "set_inductance_matrix");
+     }},
+    {"set_force_torque",
+     [](FuzzInput& in) {
+         const CoilSet set = fuzz_set(in);
+         const std::size_t row = in.below(set.size());
+         const Eigen::Vector3d f = in.below(2) == 0 ? set_force(set, row) : set_torque(set, row);
+         for (int k = 0; k < 3; ++k) require_finite(f[k], "set_force/set_torque");
+     }},
+    {"rig3_coils",
+     [](FuzzInput& in) {
+         const CoilSet rig(rig3_coils(in.number(), in.number(), in.number(), in.below(2) ? SetShape::Rect : SetShape::Circle));
+         require_finite(set_uniform_sphere(rig, in.number(), {in.number(), in.number(), in.number()}), "uniform sphere");
+     }},
     {"coil_table",
      [](FuzzInput& in) {
          std::vector<CoilRow> rows(in.below(4));

@@ -5,6 +5,7 @@
 #include <Eigen/Core>
 #include <cmath>
 
+#include "coilwright/constants.hpp"
 #include "coilwright/sets.hpp"
 
 namespace coilwright::sets_detail {
@@ -64,6 +65,10 @@ inline double rounding_radius(const SetCoil& c, const Eigen::Vector3d& point) {
 // local components. Throws SingularPointError on a filament or sheet.
 Eigen::Vector3d circle_field_local(const SetCoil& coil, const Eigen::Vector3d& local);
 Eigen::Vector3d rect_field_local(const SetCoil& coil, const Eigen::Vector3d& local);
+
+// mu0 N I / (4 pi) of a rectangle, and the squared reach of the rectangle kernel (rect_kernel.hpp).
+inline double rect_scale(const SetCoil& c) { return kMu0 * c.turns * c.current / (4.0 * kPi); }
+double rect_kernel_reach2(const SetCoil& coil);
 
 // Thick rectangular winding: the filament field averaged over the cross-section.
 Eigen::Vector3d thick_rect_field_local(const SetCoil& coil, const Eigen::Vector3d& local);

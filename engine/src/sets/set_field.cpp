@@ -11,10 +11,61 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/loop_batch.hpp"
 #include "coilwright/sets.hpp"
+#include "rect_kernel.hpp"
 
 namespace coilwright {
 
 using sets_detail::to_global;
+
+namespace {
+
+constexpr int kLanes = 4;
+using Pack = double __attribute__((vector_size(kLanes * sizeof(double))));
+using PackMask = decltype(Pack{} < Pack{});
+using Lanes = detail::PackLanes<Pack, PackMask, kLanes>;
+
+// Adds the field of a thin rectangle at m local points (padded to whole packs) to the totals,
+// through the rectangle kernel in packs; points beyond its reach, and points of a tilted coil
+// within rounding of the wire, take coil_field's path one by one, as set_field does.
+void add_rect_chunk(const SetCoil& coil, const CoilFrame& f, bool tilted, const double* x, const double* y,
+                    const double* z, const double* lx, const double* ly, const double* lz, std::size_t m, double* bx,
+                    double* by, double* bz) {
+    constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
+    using K = sets_detail::RectKernel<Lanes>;
+    const double reach2 = sets_detail::rect_kernel_reach2(coil), scale = sets_detail::rect_scale(coil);
+    const double hw = 0.5 * coil.size, hh = 0.5 * coil.height;
+    for (std::size_t k0 = 0; k0 < m; k0 += kLanes) {
+        Pack px, py, pz;
+        for (int l = 0; l < kLanes; ++l) {
+            const std::size_t k = k0 + static_cast<std::size_t>(l) < m ? k0 + static_cast<std::size_t>(l) : k0;
+            px[l] = lx[k];
+            py[l] = ly[k];
+            pz[l] = lz[k];
+        }
+        Pack fx, fy, fz;
+        K::field(px, py, pz, hw, hh, fx, fy, fz);
+        const PackMask inside = K::within(px, py, pz, reach2);
+        for (int l = 0; l < kLanes && k0 + static_cast<std::size_t>(l) < m; ++l) {
+            const std::size_t k = k0 + static_cast<std::size_t>(l);
+            Eigen::Vector3d b;
+            if (inside[l] == 0 || tilted) {
+                try {
+                    b = coil_field(coil, f, {x[k], y[k], z[k]});
+                } catch (const std::exception&) {
+                    b.setConstant(kNaN);
+                }
+            } else {
+                const Eigen::Vector3d bl(scale * fx[l], scale * fy[l], scale * fz[l]);
+                b = bl.allFinite() ? to_global(f, bl.x(), bl.y(), bl.z()) : Eigen::Vector3d::Constant(kNaN);
+            }
+            bx[k] = bx[k] + b.x();
+            by[k] = by[k] + b.y();
+            bz[k] = bz[k] + b.z();
+        }
+    }
+}
+
+}  // namespace
 
 Eigen::Vector3d coil_field(const SetCoil& coil, const CoilFrame& frame, const Eigen::Vector3d& point) {
     const Eigen::Vector3d local = frame.to_local(point);
@@ -70,6 +121,7 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
         const CoilFrame& f = set.frame(i);
         const bool loop = coil.shape == SetShape::Circle && !coil.thick();
         const bool tilted = !sets_detail::axis_aligned(f);
+        const bool thin_rect = coil.shape == SetShape::Rect && !coil.thick();
         for (std::size_t start = 0; start < n; start += kChunk) {
             const std::size_t m = std::min(kChunk, n - start);
             if (loop) {
@@ -100,6 +152,15 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
                     by[start + k] = by[start + k] + b.y();
                     bz[start + k] = bz[start + k] + b.z();
                 }
+            } else if (thin_rect) {
+                for (std::size_t k = 0; k < m; ++k) {
+                    const Eigen::Vector3d local = f.to_local({x[start + k], y[start + k], z[start + k]});
+                    lx[k] = local.x();
+                    ly[k] = local.y();
+                    lz[k] = local.z();
+                }
+                add_rect_chunk(coil, f, tilted, x + start, y + start, z + start, lx, ly, lz, m, bx + start, by + start,
+                               bz + start);
             } else {
                 for (std::size_t k = 0; k < m; ++k) {
                     const std::size_t at = start + k;

@@ -79,9 +79,11 @@ double set_uniform_sphere(const CoilSet& set, double tolerance, const Eigen::Vec
         return worst;
     };
     const double size = smallest_dimension(set);
+    // Steps of 1/256 of the smallest coil, growing with the radius (1/64 of it), so a scan out
+    // to 1000 sizes takes at most about a thousand shells.
     const double step = size / 256.0;
-    return first_crossing([&](double s) { return 1.0 + worst_on_shell(s); }, tolerance, [&](double) { return step; },
-                          1e3 * size);
+    return first_crossing([&](double s) { return 1.0 + worst_on_shell(s); }, tolerance,
+                          [&](double s) { return std::max(step, s / 64.0); }, 1e3 * size);
 }
 
 }  // namespace coilwright
