@@ -34,9 +34,11 @@ struct SetCoil {
 // The local frame of a coil: u along the width (rect), v = n x u, n the unit axis.
 struct CoilFrame {
     Eigen::Vector3d centre, u, v, n;
+    // Written out, in one order of operations that the batch code repeats (same bits).
     Eigen::Vector3d to_local(const Eigen::Vector3d& p) const {
-        const Eigen::Vector3d d = p - centre;
-        return {d.dot(u), d.dot(v), d.dot(n)};
+        const double dx = p.x() - centre.x(), dy = p.y() - centre.y(), dz = p.z() - centre.z();
+        return {dx * u.x() + dy * u.y() + dz * u.z(), dx * v.x() + dy * v.y() + dz * v.z(),
+                dx * n.x() + dy * n.y() + dz * n.z()};
     }
     Eigen::Vector3d to_global(const Eigen::Vector3d& w) const { return w.x() * u + w.y() * v + w.z() * n; }
 };

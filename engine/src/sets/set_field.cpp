@@ -125,13 +125,20 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
         for (std::size_t start = 0; start < n; start += kChunk) {
             const std::size_t m = std::min(kChunk, n - start);
             if (loop) {
+                const double cx = f.centre.x(), cy = f.centre.y(), cz = f.centre.z();
+                const double ux = f.u.x(), uy = f.u.y(), uz = f.u.z(), vx = f.v.x(), vy = f.v.y(), vz = f.v.z();
+                const double nx = f.n.x(), ny = f.n.y(), nz = f.n.z();
+                // Plain loops over arrays (they vectorise), in CoilFrame::to_local's order.
                 for (std::size_t k = 0; k < m; ++k) {
-                    const Eigen::Vector3d local = f.to_local({x[start + k], y[start + k], z[start + k]});
-                    lx[k] = local.x();
-                    ly[k] = local.y();
-                    lz[k] = local.z();
-                    r[k] = sets_detail::axis_distance(lx[k], ly[k]);
+                    const double dx = x[start + k] - cx, dy = y[start + k] - cy, dz = z[start + k] - cz;
+                    lx[k] = dx * ux + dy * uy + dz * uz;
+                    ly[k] = dx * vx + dy * vy + dz * vz;
+                    lz[k] = dx * nx + dy * ny + dz * nz;
+                    r[k] = std::sqrt(lx[k] * lx[k] + ly[k] * ly[k]);
                 }
+                for (std::size_t k = 0; k < m; ++k)  // axis_distance's careful cases, rarely taken
+                    if (!(std::isfinite(r[k]) && (r[k] > 1e-150 || (lx[k] == 0.0 && ly[k] == 0.0))))
+                        r[k] = sets_detail::axis_distance(lx[k], ly[k]);
                 try {
                     loop_field_batch({coil.size, coil.turns, coil.current}, lz, r, m, fz, fr);
                 } catch (const std::exception&) {  // an invalid loop: every point is an error
@@ -145,12 +152,12 @@ std::size_t set_field_batch(const CoilSet& set, const double* x, const double* y
                             sets_detail::rounding_radius(coil, p))
                             fz[k] = fr[k] = kNaN;
                     }
-                for (std::size_t k = 0; k < m; ++k) {
-                    const Eigen::Vector3d bl = sets_detail::circle_local(lx[k], ly[k], r[k], fz[k], fr[k]);
-                    const Eigen::Vector3d b = to_global(f, bl.x(), bl.y(), bl.z());
-                    bx[start + k] = bx[start + k] + b.x();
-                    by[start + k] = by[start + k] + b.y();
-                    bz[start + k] = bz[start + k] + b.z();
+                for (std::size_t k = 0; k < m; ++k) {  // circle_local and to_global, written out
+                    const double s = r[k] == 0.0 ? 0.0 : fr[k] / r[k];
+                    const double bu = s * lx[k], bv = s * ly[k], bn = fz[k];
+                    bx[start + k] = bx[start + k] + ((ux * bu + vx * bv) + nx * bn);
+                    by[start + k] = by[start + k] + ((uy * bu + vy * bv) + ny * bn);
+                    bz[start + k] = bz[start + k] + ((uz * bu + vz * bv) + nz * bn);
                 }
             } else if (thin_rect) {
                 for (std::size_t k = 0; k < m; ++k) {
