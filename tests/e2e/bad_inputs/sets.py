@@ -91,5 +91,7 @@ CASES = {
         "bad": {0: ["0", "-1"], 1: ["-1"], 2: [], 3: ['"hexagon"', "2"]},
         "bad_calls": [],
         "shaped": True,
+        # A coil set: a single cell shows its top-left cell, the text of the first row's shape.
+        "text": True,
     },
 }
