@@ -74,6 +74,42 @@ TEST(SetInductance, MpmathNeumannReference) {
     std::printf("set_mutual.csv: worst relative error %.2e\n", worst);
 }
 
+// Two circles with a common centre whose axes meet at an angle theta (radii a < A): the series
+// in zonal harmonics M = (mu0 pi a^2 / A) sum_j C(-3/2, j) P_2j(0) (a/A)^2j P_2j+1(cos theta) /
+// (2j + 2) (J. C. Maxwell, A Treatise on Electricity and Magnetism, 1873, art. 697, quoted from
+// memory; rederived here from the big circle's on-axis field B = mu0 A^2 / (2 (A^2 + z^2)^3/2),
+// its interior harmonics and their flux through the small circle's disk).
+TEST(SetInductance, MaxwellSeriesForConcentricInclinedCircles) {
+    const double big = 0.2, small = 0.05, x = small / big;
+    for (double theta_deg : {0.0, 30.0, 60.0, 90.0, 135.0}) {
+        const double theta = theta_deg * kPi / 180.0, c = std::cos(theta);
+        double sum = 0.0, binom = 1.0, p_even_at_0 = 1.0, xpow = 1.0;
+        for (int j = 0; j < 40; ++j) {
+            const int n = 2 * j + 1;
+            // P_n(cos theta) by the three-term recurrence.
+            double p0 = 1.0, p1 = c;
+            for (int k = 1; k < n; ++k) {
+                const double p2 = ((2.0 * k + 1.0) * c * p1 - k * p0) / (k + 1.0);
+                p0 = p1;
+                p1 = p2;
+            }
+            sum += binom * p_even_at_0 * xpow * p1 / (2.0 * j + 2.0);
+            binom *= (-1.5 - j) / (j + 1.0);                          // C(-3/2, j + 1)
+            p_even_at_0 *= -(2.0 * j + 1.0) / (2.0 * j + 2.0);        // P_2j+2(0)
+            xpow *= x * x;
+        }
+        const double maxwell = kMu0 * kPi * small * small / big * sum;
+        const SetCoil a = circle({0, 0, 0}, kZ, big, 1, 1);
+        const SetCoil b = circle({0, 0, 0}, {std::sin(theta), 0, std::cos(theta)}, small, 1, 1);
+        const double m = mutual(a, b);
+        if (theta_deg == 90.0) {
+            EXPECT_LT(std::fabs(m), 1e-15 * kMu0 * small) << "perpendicular: no coupling";
+        } else {
+            EXPECT_NEAR(m, maxwell, 1e-13 * std::fabs(maxwell)) << theta_deg;
+        }
+    }
+}
+
 // Two equal parallel coaxial squares of side a at distance d: M = (2 mu0 / pi) [a asinh(a/d)
 // - a asinh(a / sqrt(a^2 + d^2)) - 2 sqrt(a^2 + d^2) + sqrt(2a^2 + d^2) + d] (F. W. Grover,
 // Inductance Calculations, 1946, ch. 16: parallel sides' partial mutual inductances).
