@@ -26,6 +26,7 @@
 #include <vector>
 
 #include "coilwright/field.hpp"
+#include "coilwright/sets.hpp"
 
 namespace {
 
@@ -35,6 +36,7 @@ using namespace coilwright;
 struct Points {
     std::size_t n = 0;
     std::vector<double> z, r, zero, k;  // k: elliptic modulus of the loop at (z, r), for the reference
+    std::vector<double> x3, y3, z3;     // points in space for the coil-set kernels
 };
 
 // Where every kernel writes its result; the sum of all results is printed to stderr so the
@@ -114,6 +116,22 @@ void boost_ellint_1_2(const Points& p, Output& o) {
     }
 }
 
+// Three-axis rigs of six coils (three orthogonal pairs, the outermost of radius or half-side 3a) at
+// points in space within 3 loop radii of the centre: all three field components per point.
+const CoilSet kRigCircles(rig3_coils(6 * kRadius, 100, 1.5, SetShape::Circle));
+const CoilSet kRigSquares(rig3_coils(6 * kRadius, 100, 1.5, SetShape::Rect));
+
+void rig6(const CoilSet& rig, const Points& p, Output& o) {
+    // Bx and By land in the output; Bz in a scratch column (counted by the checksum through Bx).
+    static thread_local std::vector<double> bz3;
+    bz3.resize(p.n);
+    set_field_batch(rig, p.x3.data(), p.y3.data(), p.z3.data(), p.n, o.bz.data(), o.br.data(), bz3.data());
+    for (std::size_t i = 0; i < p.n; ++i) o.bz[i] += bz3[i];
+}
+
+void rig6_circles(const Points& p, Output& o) { rig6(kRigCircles, p, o); }
+void rig6_squares(const Points& p, Output& o) { rig6(kRigSquares, p, o); }
+
 struct Kernel {
     const char* name;
     void (*run)(const Points&, Output&);
@@ -128,6 +146,8 @@ const Kernel kKernels[] = {
     {"solenoid_offaxis", solenoid_offaxis},        // thin current sheet, one call per point
     {"thick_offaxis", thick_offaxis},              // thick winding, inside it and around it
     {"stack3_mixed", stack3_mixed},                // loop + thin solenoid + thick coil table
+    {"rig6_circles", rig6_circles},                // coil set: three-axis rig of circles, Bx, By, Bz
+    {"rig6_squares", rig6_squares},                // coil set: three-axis rig of squares, Bx, By, Bz
     {"boost_ellint_1_2", boost_ellint_1_2},        // reference: ellint_1 + ellint_2, scalar
 };
 
@@ -161,6 +181,15 @@ Points make_points(std::size_t n) {
         p.r[i] = r;
         const double beta2 = (kRadius + r) * (kRadius + r) + z * z;
         p.k[i] = std::sqrt(4.0 * kRadius * r / beta2);
+    }
+    SplitMix64 rng3{20261202};
+    p.x3.resize(n);
+    p.y3.resize(n);
+    p.z3.resize(n);
+    for (std::size_t i = 0; i < n; ++i) {
+        p.x3[i] = (6.0 * rng3.uniform() - 3.0) * kRadius;
+        p.y3[i] = (6.0 * rng3.uniform() - 3.0) * kRadius;
+        p.z3[i] = (6.0 * rng3.uniform() - 3.0) * kRadius;
     }
     return p;
 }

@@ -99,6 +99,8 @@ def load(idl_dir):
             for key in ("unit", "help"):
                 if not arg.get(key):
                     sys.exit(f"catalogue: {fn['name']}.{arg['name']}: missing {key}")
+            if "columns" in arg and (kind != "table" or len(arg["columns"]) != 2 or not 1 <= arg["columns"][0] <= arg["columns"][1]):
+                sys.exit(f"catalogue: {fn['name']}.{arg['name']}: columns = [fewest, most] is for tables")
             resolve_choice_set(fn["name"], arg, data["choices"])
             check_choice(fn["name"], arg)
         for key in ("group", "returns", "summary", "accuracy"):
@@ -247,6 +249,9 @@ def gen_specs(data):
             else:
                 extra = "nullptr, 0, false, nullptr"
                 default = "0.0" if arg["kind"] == "raw" else repr(float(arg.get("default", 0.0)))
+            if arg["kind"] == "table":
+                low, high = arg.get("columns", [6, 6])
+                extra += f", {low}, {high}"
             rows.append(f"    {{{cxx_string(arg['name'])}, ArgKind::{arg['kind'].capitalize()}, {optional}, {default}, {extra}}},")
         out.append(f"const ArgSpec kArgs_{fn['name']}[] = {{")
         out += rows

@@ -2,7 +2,7 @@
 
 #include <algorithm>
 #include <cctype>
-#include <cstdio>
+#include <charconv>
 #include <string_view>
 #include <vector>
 
@@ -45,9 +45,9 @@ std::string error_text(CellError error) {
 }
 
 std::string number_text(double v) {
-    char buffer[32];
-    std::snprintf(buffer, sizeof buffer, "%.15g", v);
-    return buffer;
+    char buffer[40];
+    const auto end = std::to_chars(buffer, buffer + sizeof buffer, v, std::chars_format::general, 15).ptr;
+    return std::string(buffer, end);
 }
 
 // The arguments of element (r, c) of an array call: each range replaced by the cell that

@@ -31,6 +31,8 @@ struct ArgSpec {
     std::size_t choice_count = 0;
     bool accepts_numbers = false;
     const char* default_text = nullptr;
+    // Table arguments only: the widths a range may have (a coil table 6, a coil set 12 to 15).
+    std::size_t min_columns = 0, max_columns = 0;
 };
 
 // A choice argument's value for a text (trimmed, case-insensitive) or a number; false when it

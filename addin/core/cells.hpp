@@ -68,6 +68,9 @@ struct CallResult {
     std::size_t rows = 1, cols = 1;
     std::vector<double> values;      // row-major
     std::vector<CellError> errors;   // per element, same size as values (None where valid)
+    // Arrays only, optional: per element, a non-empty text makes that cell text (a coil-set
+    // table's shape column); empty, or shorter than values, for all-number results.
+    std::vector<std::string> texts;
 
     static CallResult failure(CellError e, std::string msg) {
         CallResult r;

@@ -1,6 +1,8 @@
 #include "evaluate.hpp"
 
 #include <algorithm>
+#include <chrono>
+#include <charconv>
 #include <cmath>
 #include <exception>
 #include <limits>
@@ -17,6 +19,35 @@
 namespace coilwright::sheet {
 
 namespace {
+
+// Ends an array call that runs past work::kMaxSecondsPerCall although its work estimate let it
+// start (elements far costlier than their estimate, a slow or loaded machine): checked every
+// few elements, so a cell never keeps LibreOffice much longer than that.
+class Deadline {
+public:
+    explicit Deadline(double seconds)
+        : seconds_(seconds),
+          end_(std::chrono::steady_clock::now() +
+               std::chrono::duration_cast<std::chrono::steady_clock::duration>(std::chrono::duration<double>(seconds))) {}
+    // True once the time is up; asks the clock only on every 16th call.
+    bool passed() { return (++calls_ & 15u) == 0 && passed_now(); }
+    bool passed_now() const { return std::chrono::steady_clock::now() > end_; }
+    double seconds() const { return seconds_; }
+
+private:
+    double seconds_;
+    std::chrono::steady_clock::time_point end_;
+    unsigned calls_ = 0;
+};
+
+CallResult too_slow(const Deadline& deadline, std::size_t done, std::size_t count) {
+    char seconds[32];
+    char* end = std::to_chars(seconds, seconds + sizeof seconds, deadline.seconds()).ptr;
+    return CallResult::failure(CellError::IllegalArgument,
+                               "this call would take more than " + std::string(seconds, static_cast<std::size_t>(end - seconds)) + " s (" +
+                                   std::to_string(done) + " of " + std::to_string(count) +
+                                   " elements were done by then): split the range or ask for fewer points");
+}
 
 struct ElementOutcome {
     double value = 0.0;
@@ -114,8 +145,10 @@ const Cell& cell_of_element(const Arg& a, std::size_t r, std::size_t c) {
 // An array formula of a function with a batch: the elements' numbers are gathered in chunks
 // and handed to the batch; the elements it leaves (NaN) are evaluated one by one with fn, and
 // elements with a bad argument cell are errors, exactly as in the element loop of evaluate().
-void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> numbers,
-                         std::span<const ArgSpec* const> number_specs, CallResult& result) {
+// Returns false when the deadline passed (result unfinished).
+bool evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> numbers,
+                         std::span<const ArgSpec* const> number_specs, CallResult& result, Deadline& deadline,
+                         std::size_t& done) {
     constexpr std::size_t kChunk = 1024;
     const std::size_t count = result.rows * result.cols, n_args = numbers.size();
     std::vector<double> storage(n_args * kChunk + kChunk);  // the columns, then the batch's output
@@ -126,6 +159,10 @@ void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> n
     std::string message;
     std::size_t r = 0, c = 0;  // of the element at `start`
     for (std::size_t start = 0; start < count; start += kChunk) {
+        if (deadline.passed_now()) {  // once per chunk: a batch computes a chunk in microseconds
+            done = start;
+            return false;
+        }
         const std::size_t m = std::min(kChunk, count - start);
         for (std::size_t i = 0; i < m; ++i) {
             bool ok = true;
@@ -158,6 +195,10 @@ void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> n
                 result.values[at] = out[i];
                 continue;
             }
+            if (deadline.passed()) {
+                done = at;
+                return false;
+            }
             double element[kMaxArgs];
             for (std::size_t k = 0; k < n_args; ++k) element[k] = columns[k][i];
             const ElementOutcome o = run(prepared.fn, element);
@@ -167,6 +208,8 @@ void evaluate_in_batches(const Prepared& prepared, std::span<const Arg* const> n
                 result.values[at] = o.value;
         }
     }
+    done = count;
+    return true;
 }
 
 std::string shape_text(std::size_t rows, std::size_t cols) {
@@ -208,6 +251,11 @@ CallResult evaluate_shaped(const Prepared& prepared, std::span<const Arg* const>
 }  // namespace
 
 CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
+    return evaluate_within(function_index, args, work::kMaxSecondsPerCall);
+}
+
+CallResult evaluate_within(std::size_t function_index, std::span<const Arg> args, double max_seconds) {
+    Deadline deadline(max_seconds);
     const auto specs = function_specs();
     if (function_index >= specs.size()) return CallResult::failure(CellError::NoValue, "unknown function");
     const FunctionSpec& spec = specs[function_index];
@@ -295,8 +343,10 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
     result.errors.assign(count, CellError::None);
 
     if (any_array && prepared.batch) {
-        evaluate_in_batches(prepared, {numbers.data(), numbers.size()}, {number_specs.data(), number_specs.size()},
-                            result);
+        std::size_t done = 0;
+        if (!evaluate_in_batches(prepared, {numbers.data(), numbers.size()},
+                                 {number_specs.data(), number_specs.size()}, result, deadline, done))
+            return too_slow(deadline, done, count);
         return result;
     }
 
@@ -315,6 +365,7 @@ CallResult evaluate(std::size_t function_index, std::span<const Arg> args) {
                 if (!any_array) return CallResult::failure(CellError::IllegalArgument, message);
                 continue;
             }
+            if (any_array && deadline.passed()) return too_slow(deadline, at, count);
             ElementOutcome o = run(prepared.fn, element);
             if (o.error != CellError::None) {
                 if (!any_array) return CallResult::failure(o.error, o.message);

@@ -17,6 +17,10 @@ inline constexpr std::size_t kMaxArgs = 16;
 
 CallResult evaluate(std::size_t function_index, std::span<const Arg> args);
 
+// The same with an array call ended (an error cell) once it runs longer than max_seconds;
+// evaluate() allows work::kMaxSecondsPerCall.
+CallResult evaluate_within(std::size_t function_index, std::span<const Arg> args, double max_seconds);
+
 // The common cell of a function of numbers: every argument a single number or omitted (bit k
 // of `omitted` set: argument k left out). Returns true and the result in `out` when the call
 // succeeds with one finite number; returns false when it cannot decide (a table, a choice or a

@@ -3,7 +3,6 @@
 #include <limits>
 #include <string>
 
-#include "coilwright/coil_table.hpp"
 #include "coilwright/errors.hpp"
 #include "evaluate.hpp"
 
@@ -11,9 +10,9 @@ namespace coilwright::sheet {
 
 RangePlan plan_range(const ArgSpec& spec, std::size_t rows, std::size_t cols) {
     if (spec.kind == ArgKind::Table) {
-        if (cols != kCoilTableColumns) return RangePlan::WidthOnly;
+        if (cols < spec.min_columns || cols > spec.max_columns) return RangePlan::WidthOnly;
         if (rows > kMaxTableRows)
-            throw DomainError(std::string(spec.name) + ": the coil table has " + std::to_string(rows) +
+            throw DomainError(std::string(spec.name) + ": the table has " + std::to_string(rows) +
                               " rows up to its last filled one; the limit is " + std::to_string(kMaxTableRows));
         return RangePlan::Read;
     }

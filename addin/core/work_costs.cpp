@@ -21,4 +21,13 @@ double inductance_matrix(const CoilTable& table) {
     return kThickInductance * n + 0.2 * kThickInductance * n * (n - 1) / 2;
 }
 
+double set_point(const CoilSet& set) {
+    double cost = 0.0;
+    for (const SetCoil& c : set.coils()) {
+        if (!c.thick()) cost += c.shape == SetShape::Circle ? kLoopField : kRectFilamentField;
+        else cost += c.shape == SetShape::Circle ? kThickField : kThickRectField;
+    }
+    return cost;
+}
+
 }  // namespace coilwright::sheet::work

@@ -6,11 +6,15 @@
 #pragma once
 
 #include "coilwright/coil_table.hpp"
+#include "coilwright/sets.hpp"
 
 namespace coilwright::sheet::work {
 
 // The bound per call: about two seconds of work on a loaded two-core machine.
 inline constexpr double kMaxWorkPerCall = 2.0e8;
+// An array call still running after this many seconds is ended with an error (the estimate
+// above can be wrong for elements far costlier than typical ones).
+inline constexpr double kMaxSecondsPerCall = 2.0;
 
 inline constexpr double kLoopField = 1.0;
 inline constexpr double kSolenoidField = 10.0;
@@ -36,11 +40,26 @@ inline constexpr double kGradientPoints = 4.0;
 inline constexpr double kRadialSearchPoints = 3000.0;
 inline constexpr double kSphereSearchPoints = 100000.0;
 
+// Coil sets: a filament rectangle costs two loop fields; a thick rectangle integrates strips in
+// closed form over its depth (0.1 ms near the winding, up to 6 ms deep inside: the call
+// layer's deadline ends calls that meet many such points). Force and torque integrate the
+// other rows' field along a turn (up to 2000 points near another winding, 16 lines for a
+// thick row); the uniform sphere searches up to a few hundred shells of 256 directions.
+inline constexpr double kRectFilamentField = 2.0;
+inline constexpr double kThickRectField = 2e4;
+inline constexpr double kForceLinePoints = 16.0 * 2000.0;
+inline constexpr double kSetSphereSearchPoints = 2e5;
+inline constexpr double kSetInductancePerPair = 2e4;
+inline constexpr double kRigDesign = 100.0;
+
 // One field point of the whole table.
 double field_point(const CoilTable& table);
 
 // The inductance matrix (and with it series inductance, energy, forces) of a table: a self
 // term per row, a mutual term per pair.
 double inductance_matrix(const CoilTable& table);
+
+// One field point of the whole coil set.
+double set_point(const CoilSet& set);
 
 }  // namespace coilwright::sheet::work

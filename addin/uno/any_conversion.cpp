@@ -111,9 +111,34 @@ double calc_error_value(sheet::CellError error) {
     return d;
 }
 
+namespace {
+
+// An array with text cells: a sequence of sequences of Any (text or number per cell).
+Any mixed_array(const sheet::CallResult& result) {
+    Sequence<Sequence<Any>> out(static_cast<sal_Int32>(result.rows));
+    auto* rows = out.getArray();
+    for (std::size_t r = 0; r < result.rows; ++r) {
+        Sequence<Any> row(static_cast<sal_Int32>(result.cols));
+        Any* dst = row.getArray();
+        for (std::size_t c = 0; c < result.cols; ++c) {
+            const std::size_t at = r * result.cols + c;
+            if (at < result.texts.size() && !result.texts[at].empty())
+                dst[c] <<= rtl::OUString::fromUtf8(result.texts[at].c_str());
+            else
+                dst[c] <<= result.errors[at] == sheet::CellError::None ? result.values[at]
+                                                                      : calc_error_value(result.errors[at]);
+        }
+        rows[r] = std::move(row);
+    }
+    return Any(out);
+}
+
+}  // namespace
+
 Any to_any(const sheet::CallResult& result) {
     if (result.is_text) return Any(rtl::OUString::fromUtf8(result.text.c_str()));
     if (!result.is_array) return Any(result.values.at(0));
+    if (!result.texts.empty()) return mixed_array(result);
     Sequence<Sequence<double>> out(static_cast<sal_Int32>(result.rows));
     auto* rows = out.getArray();
     const auto cols = static_cast<sal_Int32>(result.cols);

@@ -9,11 +9,12 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "reference_csv.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 CoilTable one(double inner, double outer, double length, double centre = 0.0, double turns = 1.0,
               double current = 1.0) {
     return CoilTable({{inner, outer, length, centre, turns, current}});

@@ -6,11 +6,12 @@
 #include "coilwright/wire.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 constexpr auto kCu = Conductor::Copper;
 }  // namespace
 

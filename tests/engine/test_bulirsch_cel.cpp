@@ -8,12 +8,10 @@
 #include <cmath>
 
 #include "numerics/bulirsch_cel.hpp"
+#include "test_support.hpp"
 
 using coilwright::internal::cel;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-}  // namespace
+using coilwright::test::rel;
 
 TEST(BulirschCel, FirstAndSecondKindMatchBoost) {
     for (double k : {0.0, 1e-8, 0.1, 0.5, 0.9, 0.99, 0.999999}) {

@@ -7,12 +7,13 @@
 
 #include "coilwright/wire.hpp"
 #include "coilwright/errors.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
 constexpr double kInch = 0.0254;
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 }  // namespace
 
 TEST(AwgTable, MatchesAstmB258WithinItsRounding) {

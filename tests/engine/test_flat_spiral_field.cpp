@@ -8,11 +8,12 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 const FlatSpiralSpec kSpiral{0.02, 0.06, 30, 1.5};  // 20..60 mm, 30 turns, 1.5 A
 double mu0_k(const FlatSpiralSpec& s) { return kMu0 * s.turns * s.current / (s.outer_radius - s.inner_radius); }
 }  // namespace

@@ -9,11 +9,13 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
+using coilwright::test::derivative;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 const LoopSpec kLoop{0.25, 40, 1.5};  // a demo coil: 0.25 m, 40 turns, 1.5 A
 }  // namespace
 
@@ -72,12 +74,6 @@ TEST(LoopField, SymmetryLinearityAndScaling) {
 
 namespace {
 // Central differences with Richardson extrapolation (error O(h^4)).
-template <class F>
-double derivative(F f, double x, double h) {
-    const double d1 = (f(x + h) - f(x - h)) / (2 * h);
-    const double d2 = (f(x + h / 2) - f(x - h / 2)) / h;
-    return (4 * d2 - d1) / 3;
-}
 }  // namespace
 
 TEST(LoopField, DivergenceAndCurlVanishAwayFromTheWire) {

@@ -10,12 +10,10 @@
 #include "coilwright/field.hpp"
 #include "coilwright/inductance.hpp"
 #include "reference_csv.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-}  // namespace
+using coilwright::test::rel;
 
 TEST(LoopMutual, AgreesWithMpmathMaxwellAndNeumann) {
     // tests/reference/loop_mutual.csv: Maxwell's closed form at 80 digits checked against

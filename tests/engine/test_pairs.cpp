@@ -7,12 +7,10 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/design.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-}  // namespace
+using coilwright::test::rel;
 
 TEST(Pairs, HelmholtzSpacingIsTheRadius) {
     // Helmholtz condition for thin loops: spacing = R makes d^2B/dz^2 vanish at the centre.

@@ -10,12 +10,14 @@
 #include "coilwright/field.hpp"
 #include "coilwright/design.hpp"
 #include "field/rect_kernel.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
+using coilwright::test::derivative;
 using Eigen::Vector3d;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 const RectSpec kRect{0.6, 0.4, 25, 1.2};  // an oblong calibration coil: 0.6 m x 0.4 m, 25 turns, 1.2 A
 
 // On-axis closed form, summed side by side (each side: mu0 I / (4 pi d) (cos a1 - cos a2),
@@ -27,12 +29,6 @@ double on_axis(const RectSpec& r, double z) {
            (1 / (A + z * z) + 1 / (B + z * z));
 }
 
-template <class F>
-double derivative(F f, double x, double h) {  // central difference, Richardson-extrapolated
-    const double d1 = (f(x + h) - f(x - h)) / (2 * h);
-    const double d2 = (f(x + h / 2) - f(x - h / 2)) / h;
-    return (4 * d2 - d1) / 3;
-}
 }  // namespace
 
 TEST(RectField, SquareCentreIsTwoRootTwoMu0NIOverPiS) {

@@ -8,11 +8,12 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/design.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 const double R = 0.3;
 const CoilTable kHelmholtz({{R, R, 0, -R / 2, 50, 1}, {R, R, 0, R / 2, 50, 1}});
 const CoilTable kThickPair({{0.2, 0.23, 0.03, -0.11, 100, 2}, {0.2, 0.23, 0.03, 0.11, 100, 2}});

@@ -7,12 +7,10 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/design.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-}  // namespace
+using coilwright::test::rel;
 
 TEST(Sensitivity, LoopCentreFieldAgainstTheDerivativeOfTheTextbookFormula) {
     // B(0) = mu0 N I / (2a)  =>  dB/da = -mu0 N I / (2 a^2); dB/dN = mu0 I / (2a); dB/dI = mu0 N / (2a).

@@ -8,11 +8,13 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
+using coilwright::test::derivative;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 const SolenoidSpec kCoil{0.05, 0.2, 500, 2.0};  // 50 mm radius, 200 mm long, 500 turns, 2 A
 double mu0_n_i(const SolenoidSpec& s) { return kMu0 * s.turns / s.length * s.current; }
 
@@ -89,15 +91,6 @@ TEST(SolenoidField, TwoHalvesMakeTheWhole) {
             EXPECT_LT(std::fabs(whole.br - parts.br), 4e-15 * scale) << z << " " << r;
         }
 }
-
-namespace {
-template <class F>
-double derivative(F f, double x, double h) {  // central differences, Richardson: O(h^4)
-    const double d1 = (f(x + h) - f(x - h)) / (2 * h);
-    const double d2 = (f(x + h / 2) - f(x - h / 2)) / h;
-    return (4 * d2 - d1) / 3;
-}
-}  // namespace
 
 TEST(SolenoidField, DivergenceAndCurlVanishAwayFromTheSheet) {
     // div B = (1/r) d(r Br)/dr + dBz/dz = 0, (curl B)_phi = dBr/dz - dBz/dr = 0 (Maxwell).

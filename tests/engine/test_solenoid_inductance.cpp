@@ -9,12 +9,10 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/inductance.hpp"
 #include "reference_csv.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-}  // namespace
+using coilwright::test::rel;
 
 TEST(SolenoidInductance, AgreesWithMpmathFromRibbonToNeedle) {
     // tests/reference/solenoid_inductance.csv: Lorenz/Nagaoka closed form at 120 digits, checked

@@ -8,11 +8,12 @@
 
 #include "coilwright/errors.hpp"
 #include "coilwright/inductance.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 
 // A gradient-coil-like table: thick pair, a sheet, a flat spiral, a loop, stacked segments.
 CoilTable demo_table() {

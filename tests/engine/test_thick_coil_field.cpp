@@ -9,11 +9,13 @@
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
+using coilwright::test::rel;
+using coilwright::test::derivative;
 
 namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
 // 50..80 mm radius, 100 mm long, 800 turns of 3 A.
 const ThickCoilSpec kCoil{0.05, 0.08, 0.1, 800, 3.0};
 double mu0_j(const ThickCoilSpec& c) {
@@ -73,15 +75,6 @@ TEST(ThickCoilField, PartsMakeTheWhole) {
     std::printf("thick coil superposition: worst difference %.2e of |B|\n", worst);
     EXPECT_LT(worst, 1e-12);
 }
-
-namespace {
-template <class F>
-double derivative(F f, double x, double h) {
-    const double d1 = (f(x + h) - f(x - h)) / (2 * h);
-    const double d2 = (f(x + h / 2) - f(x - h / 2)) / h;
-    return (4 * d2 - d1) / 3;
-}
-}  // namespace
 
 TEST(ThickCoilField, CurlIsMu0JInsideAndZeroOutsideDivergenceZeroEverywhere) {
     // Ampere-Maxwell in differential form: (curl B)_phi = dBr/dz - dBz/dr = mu0 J_phi, which is

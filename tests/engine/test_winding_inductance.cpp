@@ -9,19 +9,11 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/inductance.hpp"
 #include "reference_csv.hpp"
+#include "test_support.hpp"
 
 using namespace coilwright;
-
-namespace {
-double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
-
-// Derivative by central differences with Richardson extrapolation (error O(h^4)).
-template <class F>
-double derivative(F f, double x, double h) {
-    const double d1 = (f(x + h) - f(x - h)) / (2 * h), d2 = (f(x + h / 2) - f(x - h / 2)) / h;
-    return (4 * d2 - d1) / 3;
-}
-}  // namespace
+using coilwright::test::rel;
+using coilwright::test::derivative;
 
 TEST(WindingInductance, AgreesWithIndependentReference) {
     // tests/reference/winding_inductance.csv: Neumann's angle integral with closed-form axial

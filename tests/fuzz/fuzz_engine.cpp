@@ -17,6 +17,7 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "coilwright/inductance.hpp"
+#include "coilwright/sets.hpp"
 #include "coilwright/wire.hpp"
 #include "fuzz_input.hpp"
 #include "numerics/bulirsch_cel.hpp"
@@ -38,10 +39,6 @@ void finite(const FieldRZ& f, const char* what) {
     finite(f.br, what);
 }
 
-void finite(const Eigen::Vector3d& b, const char* what) {
-    for (int k = 0; k < 3; ++k) finite(b[k], what);
-}
-
 void finite(const CoilTable& t, const char* what) {
     for (const CoilRow& row : t.rows())
         for (double v : {row.inner_radius, row.outer_radius, row.length, row.centre_z, row.turns, row.current})
@@ -59,6 +56,11 @@ void finite(const HotState& s, const char* what) {
     finite(s.resistance, what);
 }
 
+template <class Derived>
+void finite(const Eigen::DenseBase<Derived>& m, const char* what) {
+    for (Eigen::Index i = 0; i < m.size(); ++i) finite(m.derived().data()[i], what);
+}
+
 void finite(const std::vector<double>& v, const char* what) {
     for (double x : v) finite(x, what);
 }
@@ -71,6 +73,29 @@ CoilTable table(FuzzInput& in) {
 }
 
 CoilSection section(FuzzInput& in) { return {in.number(), in.number(), in.number()}; }
+
+// A coil set of one to three rows (shapes, thickness and circuits too).
+std::vector<SetCoil> set_rows(FuzzInput& in) {
+    std::vector<SetCoil> coils(1 + in.below(3));
+    for (auto& c : coils) {
+        c.shape = in.below(2) == 0 ? SetShape::Circle : SetShape::Rect;
+        c.centre = {in.number(), in.number(), in.number()};
+        c.axis = {in.number(), in.number(), in.number()};
+        c.size = in.number();
+        c.height = c.shape == SetShape::Rect ? in.number() : 0.0;
+        c.roll_deg = in.number();
+        c.turns = in.number();
+        c.current = in.number();
+        if (in.below(2) == 0) c.circuit = in.number();
+        if (in.below(3) == 0) {
+            c.depth = in.number();
+            c.breadth = in.number();
+        }
+    }
+    return coils;
+}
+
+CoilSet coil_set(FuzzInput& in) { return CoilSet(set_rows(in)); }
 Conductor conductor(FuzzInput& in) { return static_cast<Conductor>(in.below(3)); }  // 2 names none
 Packing packing(FuzzInput& in) { return static_cast<Packing>(in.below(3)); }
 CoilParameter parameter(FuzzInput& in) { return static_cast<CoilParameter>(in.below(8)); }
@@ -215,6 +240,34 @@ const EntryPoint kEntryPoints[] = {
     ENTRY(pickup_sensitivity, finite(pickup_sensitivity(N, N, N, N, N, N), "pickup_sensitivity")),
     ENTRY(johnson_noise, finite(johnson_noise(N, N, N), "johnson_noise")),
     ENTRY(pickup_nef, finite(pickup_nef(N, N, N, N, N, N, N, N), "pickup_nef")),
+    // sets
+    ENTRY(coil_frame, {
+        const CoilFrame f = coil_frame(point(in), N, point(in));
+        finite(f.u, "coil_frame");
+        finite(f.v, "coil_frame");
+    }),
+    ENTRY(coil_field, {
+        const std::vector<SetCoil> rows = set_rows(in);
+        const CoilSet set(rows);  // validates the row
+        finite(coil_field(set.coils()[0], set.frame(0), point(in)), "coil_field");
+    }),
+    ENTRY(set_field, finite(set_field(coil_set(in), point(in)), "set_field")),
+    ENTRY(set_field_batch, {
+        const CoilSet set = coil_set(in);
+        const double x[3] = {N, N, N}, y[3] = {N, N, N}, z[3] = {N, N, N};
+        double bx[3], by[3], bz[3];
+        (void)set_field_batch(set, x, y, z, 3, bx, by, bz);  // NaN where set_field would throw
+    }),
+    ENTRY(circuit_field_matrix, finite(circuit_field_matrix(coil_set(in), point(in)), "circuit_field_matrix")),
+    ENTRY(set_currents, {
+        const CoilSet set = coil_set(in);
+        finite(set_currents(set, {point(in)}, {point(in)}), "set_currents");
+    }),
+    ENTRY(set_uniform_sphere, finite(set_uniform_sphere(coil_set(in), N, point(in)), "set_uniform_sphere")),
+    ENTRY(set_inductance_matrix, finite(set_inductance_matrix(coil_set(in), N), "set_inductance_matrix")),
+    ENTRY(set_force, { const CoilSet set = coil_set(in); finite(set_force(set, in.below(4)), "set_force"); }),
+    ENTRY(set_torque, { const CoilSet set = coil_set(in); finite(set_torque(set, in.below(4)), "set_torque"); }),
+    ENTRY(rig3_coils, finite(set_field(CoilSet(rig3_coils(N, N, N, static_cast<SetShape>(in.below(3)))), point(in)), "rig3_coils")),
     // the engine's own numerics, in their documented domain (p > 0, kc != 0, all finite)
     ENTRY(cel, {
         const double kc = N, p = N, a = N, b = N;

@@ -23,28 +23,9 @@ import random
 
 import mpmath as mp
 
-MU0 = "1.25663706127e-6"  # CODATA 2022, as in engine/include/coilwright/constants.hpp
+from mp_kernels import MU0, cel, loop_field
+
 DPS = 50
-
-
-def cel(kc, p, a, b):
-    """Bulirsch's cel(kc, p, a, b) = a R_F(0, kc^2, 1) + (b - a p) / 3 R_J(0, kc^2, 1, p)."""
-    kc, p, a, b = map(mp.mpf, (kc, p, a, b))  # no Python float may slip in (-2 / 3 would)
-    x = kc * kc
-    rj = mp.elliprd(0, x, 1) if p == 1 else mp.elliprj(0, x, 1, p)  # R_J(x, y, z, z) = R_D
-    return a * mp.elliprf(0, x, 1) + (b - a * p) / 3 * rj
-
-
-def loop_field(a, z, r):
-    """Field of one turn of radius a carrying 1 A, in units of mu0 (Smythe's form)."""
-    alpha2 = (a - r) ** 2 + z * z
-    beta2 = (a + r) ** 2 + z * z
-    beta = mp.sqrt(beta2)
-    m = 1 - alpha2 / beta2
-    K, E = mp.ellipk(m), mp.ellipe(m)
-    bz = ((a * a - r * r - z * z) * E + alpha2 * K) / (2 * mp.pi * alpha2 * beta)
-    br = 0 if r == 0 else z * ((a * a + r * r + z * z) * E - alpha2 * K) / (2 * mp.pi * alpha2 * beta * r)
-    return bz, mp.mpf(br)
 
 
 def by_quadrature(a, length, n_turns, current, z, r):

@@ -88,3 +88,19 @@ TEST(Evaluate, HugeResultsAreRefusedNotComputed) {
     const auto r = call("LOOP_BZ", {Arg::number(1), Arg::number(1), Arg::number(1), column(many), row(many)});
     EXPECT_EQ(r.error, CellError::IllegalArgument);  // 9 million cells
 }
+
+// An array call that runs past its deadline is ended with an error that says so, whatever its
+// work estimate allowed; within the deadline the same call is computed.
+TEST(Evaluate, ArrayCallsEndAtTheirDeadline) {
+    std::vector<Cell> z;
+    for (int i = 0; i < 200000; ++i) z.push_back(Cell::of(1e-6 * i));
+    const std::vector<Arg> args = {Arg::number(0.1), Arg::number(10), Arg::number(2), Arg::array(z.size(), 1, z),
+                                   Arg::number(0.05)};
+    const auto index = static_cast<std::size_t>(function_index("LOOP_BZ"));
+    const CallResult late = evaluate_within(index, args, 1e-9);
+    EXPECT_EQ(late.error, CellError::IllegalArgument);
+    EXPECT_NE(late.message.find("would take more than"), std::string::npos) << late.message;
+    const CallResult in_time = evaluate_within(index, args, 60.0);
+    EXPECT_EQ(in_time.error, CellError::None);
+    EXPECT_EQ(in_time.values.size(), z.size());
+}

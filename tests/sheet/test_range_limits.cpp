@@ -13,7 +13,8 @@ using namespace coilwright;
 using namespace coilwright::sheet;
 
 namespace {
-const ArgSpec kTable{"coils", ArgKind::Table, false, 0.0};
+const ArgSpec kTable{"coils", ArgKind::Table, false, 0.0, nullptr, 0, false, nullptr, 6, 6};
+const ArgSpec kSet{"set", ArgKind::Table, false, 0.0, nullptr, 0, false, nullptr, 12, 15};
 const ArgSpec kNumber{"z", ArgKind::Number, false, 0.0};
 }  // namespace
 
@@ -21,6 +22,11 @@ TEST(RangeLimits, ATableOfTheWrongWidthIsPassedOnByItsWidthAlone) {
     EXPECT_EQ(plan_range(kTable, 1'048'576, 1024), RangePlan::WidthOnly);  // a whole sheet
     EXPECT_EQ(plan_range(kTable, 0, 5), RangePlan::WidthOnly);
     EXPECT_EQ(plan_range(kTable, 2, 6), RangePlan::Read);
+    // A coil set has 12 to 15 columns (the last three optional).
+    EXPECT_EQ(plan_range(kSet, 2, 11), RangePlan::WidthOnly);
+    EXPECT_EQ(plan_range(kSet, 2, 12), RangePlan::Read);
+    EXPECT_EQ(plan_range(kSet, 2, 15), RangePlan::Read);
+    EXPECT_EQ(plan_range(kSet, 2, 16), RangePlan::WidthOnly);
 }
 
 TEST(RangeLimits, ATableLongerThanTheLimitIsRefused) {

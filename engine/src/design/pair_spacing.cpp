@@ -72,7 +72,7 @@ double pair_centre_field(const CoilSection& coil, double turns, double current, 
     validate_shape(coil);
     check::non_negative(spacing, "spacing");
     if (spacing < coil.length) raise_domain_error("the coils overlap: spacing must be >= length");
-    return 2.0 * axial_field(single(coil, turns, current), spacing / 2.0);
+    return check::finite_result(2.0 * axial_field(single(coil, turns, current), spacing / 2.0), "the centre field");
 }
 
 double gradient_pair_gradient(const CoilSection& coil, double turns, double current, double spacing) {
@@ -80,7 +80,8 @@ double gradient_pair_gradient(const CoilSection& coil, double turns, double curr
     check::non_negative(spacing, "spacing");
     if (spacing < coil.length) raise_domain_error("the coils overlap: spacing must be >= length");
     // B(z) = Bs(z - s/2) - Bs(z + s/2), so B'(0) = Bs'(-s/2) - Bs'(s/2) = -2 Bs'(s/2).
-    return -2.0 * axial_jet_n<2>(single(coil, turns, current), spacing / 2.0).c[1];
+    return check::finite_result(-2.0 * axial_jet_n<2>(single(coil, turns, current), spacing / 2.0).c[1],
+                                "the centre gradient");
 }
 
 double helmholtz_centre_field(double radius, double turns, double current) {

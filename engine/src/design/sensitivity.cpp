@@ -22,6 +22,11 @@ const CoilRow& row_at(const CoilTable& table, std::size_t index) {
     return table.rows()[index];
 }
 
+void check_parameter(CoilParameter parameter) {
+    if (static_cast<unsigned>(parameter) > static_cast<unsigned>(CoilParameter::Current))
+        raise_domain_error("parameter must be radius, inner, outer, length, position, turns or current");
+}
+
 bool is_thin(const CoilRow& row) { return row.inner_radius == row.outer_radius; }
 
 // A step for finite differences, small next to the row's own dimensions.
@@ -39,8 +44,9 @@ double step_for(const CoilRow& row, CoilParameter parameter) {
 }  // namespace
 
 CoilTable perturbed(const CoilTable& table, std::size_t index, CoilParameter parameter, double delta) {
+    row_at(table, index);  // checks the index
     std::vector<CoilRow> rows = table.rows();
-    CoilRow& row = rows.at(index);
+    CoilRow& row = rows[index];
     const bool thin = is_thin(row);
     switch (parameter) {
         case CoilParameter::Radius:
@@ -73,6 +79,7 @@ CoilTable perturbed(const CoilTable& table, std::size_t index, CoilParameter par
 
 double field_sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter, double z0) {
     check::finite(z0, "z");
+    check_parameter(parameter);
     const CoilRow& row = row_at(table, index);
     switch (parameter) {
         case CoilParameter::Turns:
@@ -82,11 +89,12 @@ double field_sensitivity(const CoilTable& table, std::size_t index, CoilParamete
             unit.turns = 1.0;
             unit.current = 1.0;
             const double per_ampere_turn = axial_jet_n<1>(unit, z0).c[0];
-            return per_ampere_turn * (parameter == CoilParameter::Turns ? row.current : row.turns);
+            return check::finite_result(per_ampere_turn * (parameter == CoilParameter::Turns ? row.current : row.turns),
+                                        "the sensitivity");
         }
         case CoilParameter::Position:
             // Moving a coil by d shifts its field: dB(z0)/d(centre) = -dB/dz.
-            return -axial_jet_n<2>(row, z0).c[1];
+            return check::finite_result(-axial_jet_n<2>(row, z0).c[1], "the sensitivity");
         default:
             break;
     }
@@ -96,14 +104,15 @@ double field_sensitivity(const CoilTable& table, std::size_t index, CoilParamete
     if (at_lower_limit) {
         // A loop can only grow a length: one-sided differences, Richardson to second order.
         const double d1 = (b(h) - b(0)) / h, d2 = (b(h / 2) - b(0)) / (h / 2);
-        return 2 * d2 - d1;
+        return check::finite_result(2 * d2 - d1, "the sensitivity");
     }
     const double d1 = (b(h) - b(-h)) / (2 * h), d2 = (b(h / 2) - b(-h / 2)) / h;
-    return (4 * d2 - d1) / 3;
+    return check::finite_result((4 * d2 - d1) / 3, "the sensitivity");
 }
 
 double uniform_length_sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter,
                                   double z0, double tolerance) {
+    check_parameter(parameter);
     const CoilRow& row = row_at(table, index);
     const double h = step_for(row, parameter) * 10;  // the half-length is itself a root: keep roundoff small
     const double base = axial_uniform_half_length(table, tolerance, z0);
@@ -118,7 +127,7 @@ double uniform_length_sensitivity(const CoilTable& table, std::size_t index, Coi
     const bool only_up = parameter == CoilParameter::Length && row.length == 0.0;
     const double up = slope(+1.0);
     const double down = only_up ? 0.0 : slope(-1.0);
-    return std::min({up, down, 0.0});
+    return check::finite_result(std::min({up, down, 0.0}), "the sensitivity");
 }
 
 double sensitivity(const CoilTable& table, std::size_t index, CoilParameter parameter, SensitivityQuantity quantity,

@@ -17,7 +17,7 @@ namespace {
 
 double coupling(double m, double l1, double l2) {
     if (!(l1 > 0.0 && l2 > 0.0)) raise_domain_error("a coil without turns or area has no coupling coefficient");
-    return m / std::sqrt(l1 * l2);
+    return check::finite_result(m / (std::sqrt(l1) * std::sqrt(l2)), "the coupling coefficient");  // no underflow of l1 l2
 }
 
 // N1 N2 I1 I2, checking each factor.

@@ -66,7 +66,8 @@ MatrixWithProblems inductance_matrix(const CoilTable& table, std::optional<doubl
     for (Eigen::Index i = 0; i < n; ++i) {
         const CoilRow& ri = rows[static_cast<std::size_t>(i)];
         try {
-            m.values(i, i) = ri.turns == 0.0 ? 0.0 : self_inductance(ri, loop_wire_diameter);
+            m.values(i, i) =
+                ri.turns == 0.0 ? 0.0 : check::finite_result(self_inductance(ri, loop_wire_diameter), "the self-inductance");
         } catch (const DomainError& e) {
             set_problem(m, i, i, Problem::domain(row_name(table, i) + ": ", e));
         } catch (const ConvergenceError& e) {
