@@ -150,6 +150,7 @@ Eigen::MatrixXd set_inductance_matrix(const CoilSet& set, double wire_diameter) 
             out(static_cast<Eigen::Index>(set.circuit_of(ui)), static_cast<Eigen::Index>(set.circuit_of(uj))) +=
                 set.polarity(ui) * set.polarity(uj) * rows(i, j);
         }
+    for (Eigen::Index k = 0; k < out.size(); ++k) check::finite_result(out.data()[k], "the inductance");
     return out;
 }
 

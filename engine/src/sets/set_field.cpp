@@ -69,18 +69,6 @@ void add_rect_chunk(const SetCoil& coil, const CoilFrame& f, bool tilted, const 
 
 }  // namespace
 
-Eigen::Vector3d coil_field(const SetCoil& coil, const CoilFrame& frame, const Eigen::Vector3d& point) {
-    const Eigen::Vector3d local = frame.to_local(point);
-    if (!coil.thick() && !internal::axis_aligned(frame) &&
-        internal::wire_distance(coil, local.x(), local.y(), local.z(),
-                                   internal::axis_distance(local.x(), local.y())) <=
-            internal::rounding_radius(coil, point))
-        raise_singular_point("the point lies on the current filament (within the rounding of the tilted coil's frame)");
-    const Eigen::Vector3d b = coil.shape == SetShape::Circle ? internal::circle_field_local(coil, local)
-                                                             : internal::rect_field_local(coil, local);
-    return to_global(frame, b.x(), b.y(), b.z());
-}
-
 namespace {
 
 void check_point(const Eigen::Vector3d& p) {
@@ -90,6 +78,21 @@ void check_point(const Eigen::Vector3d& p) {
 }
 
 }  // namespace
+
+Eigen::Vector3d coil_field(const SetCoil& coil, const CoilFrame& frame, const Eigen::Vector3d& point) {
+    check_point(point);
+    const Eigen::Vector3d local = frame.to_local(point);
+    if (!coil.thick() && !internal::axis_aligned(frame) &&
+        internal::wire_distance(coil, local.x(), local.y(), local.z(),
+                                   internal::axis_distance(local.x(), local.y())) <=
+            internal::rounding_radius(coil, point))
+        raise_singular_point("the point lies on the current filament (within the rounding of the tilted coil's frame)");
+    const Eigen::Vector3d b = coil.shape == SetShape::Circle ? internal::circle_field_local(coil, local)
+                                                             : internal::rect_field_local(coil, local);
+    const Eigen::Vector3d global = to_global(frame, b.x(), b.y(), b.z());
+    for (int k = 0; k < 3; ++k) check::finite_result(global[k], "B");
+    return global;
+}
 
 Eigen::Vector3d set_field(const CoilSet& set, const Eigen::Vector3d& point) {
     check_point(point);

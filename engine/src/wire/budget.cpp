@@ -29,7 +29,7 @@ HotState settle(double r20, double rise, double ambient_c, Conductor c) {
     const double t = ambient_c + rise;
     if (!(t <= kMaxConductorTemperature))
         raise_domain_error("the winding would settle above 400 C, far beyond every insulation class: reduce the load");
-    return {t, r20 * (1.0 + conductor_data(c).temp_coefficient * (t - 20.0))};
+    return {t, check::finite_result(r20 * (1.0 + conductor_data(c).temp_coefficient * (t - 20.0)), "the hot resistance")};
 }
 
 }  // namespace
