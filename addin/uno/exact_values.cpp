@@ -21,12 +21,6 @@
 
 #include "share_support.hpp"
 
-using css::uno::Any;
-using css::uno::Reference;
-using css::uno::Sequence;
-using css::uno::UNO_QUERY;
-using css::uno::UNO_QUERY_THROW;
-
 namespace coilwright::share {
 
 std::optional<double> NumberSnapshot::at(const CellKey& key) const {

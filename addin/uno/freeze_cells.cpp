@@ -26,10 +26,6 @@
 #include "formula_calls.hpp"
 #include "share_support.hpp"
 
-using css::uno::Reference;
-using css::uno::UNO_QUERY;
-using css::uno::UNO_QUERY_THROW;
-
 namespace coilwright::share {
 
 namespace {

@@ -37,11 +37,6 @@
 #include "formula_calls.hpp"
 #include "share_support.hpp"
 
-using css::uno::Any;
-using css::uno::Reference;
-using css::uno::Sequence;
-using css::uno::UNO_QUERY;
-using css::uno::UNO_QUERY_THROW;
 using css::table::CellAddress;
 using css::table::CellRangeAddress;
 using css::sheet::FormulaToken;

@@ -29,11 +29,6 @@
 #include "share_copy.hpp"
 #include "share_support.hpp"
 
-using css::uno::Any;
-using css::uno::Reference;
-using css::uno::Sequence;
-using css::uno::UNO_QUERY;
-using css::uno::UNO_QUERY_THROW;
 using rtl::OUString;
 
 namespace coilwright::share {

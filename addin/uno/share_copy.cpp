@@ -17,12 +17,6 @@
 #include "freeze_rules.hpp"
 #include "share_support.hpp"
 
-using css::uno::Any;
-using css::uno::Reference;
-using css::uno::Sequence;
-using css::uno::UNO_QUERY;
-using css::uno::UNO_QUERY_THROW;
-
 namespace coilwright::share {
 
 namespace {

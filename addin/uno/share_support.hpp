@@ -12,6 +12,13 @@
 
 namespace coilwright::share {
 
+// The UNO names every file of the share command uses.
+using css::uno::Any;
+using css::uno::Reference;
+using css::uno::Sequence;
+using css::uno::UNO_QUERY;
+using css::uno::UNO_QUERY_THROW;
+
 std::string utf8(const rtl::OUString& text);
 rtl::OUString ustr(std::string_view text);
 

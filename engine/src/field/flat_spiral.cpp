@@ -20,8 +20,7 @@ using namespace internal;
 
 void validate(const FlatSpiralSpec& spiral) {
     check::radial_extent(spiral.inner_radius, spiral.outer_radius);
-    check::non_negative(spiral.turns, "turns");
-    check::finite(spiral.current, "current");
+    check::turns_and_current(spiral.turns, spiral.current);
 }
 
 FieldRZ flat_spiral_field(const FlatSpiralSpec& spiral, double z, double r) {

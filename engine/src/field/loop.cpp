@@ -30,8 +30,7 @@ using namespace internal;
 
 void validate(const LoopSpec& loop) {
     check::positive(loop.radius, "radius");
-    check::non_negative(loop.turns, "turns");
-    check::finite(loop.current, "current");
+    check::turns_and_current(loop.turns, loop.current);
 }
 
 namespace internal {

@@ -39,8 +39,7 @@ using namespace internal;
 void validate(const RectSpec& rect) {
     check::positive(rect.width, "width");
     check::positive(rect.height, "height");
-    check::non_negative(rect.turns, "turns");
-    check::finite(rect.current, "current");
+    check::turns_and_current(rect.turns, rect.current);
 }
 
 namespace {
@@ -87,6 +86,15 @@ SidePair side_pair(double t1, double t2, double len, double d1, double d2) {
     return out;
 }
 
+// The axial field of two opposite sides, p F_a - m F_b, with p and m the point's coordinate
+// plus and minus the half-size `half` across them: written so that its terms share one sign
+// whichever side of the pair the point lies (the plain form cancels outside the rectangle).
+double opposite_sides(double p, double m, double f_a, double f_b, double half, double coord, double dd) {
+    if (p > 0.0 && m < 0.0) return p * f_a - m * f_b;
+    if (m >= 0.0) return 2.0 * half * f_a + 4.0 * coord * half * m * dd;
+    return 2.0 * half * f_b + 4.0 * coord * half * p * dd;
+}
+
 // Field in units of mu0 I / (4 pi s) from coordinates in units of s (the half-diagonal):
 // x, y, z and the offsets xm = x - a, xp = x + a, ym = y - b, yp = y + b.
 Eigen::Vector3d segments(double a, double b, double x, double y, double z, double xm, double xp, double ym,
@@ -98,20 +106,8 @@ Eigen::Vector3d segments(double a, double b, double x, double y, double z, doubl
     const SidePair sy = side_pair(yp, ym, 2.0 * b, xm * xm + z2, xp * xp + z2);
     const double f_bottom = sx.f1, f_top = sx.f2, f_right = sy.f1, f_left = sy.f2;
 
-    double bz_x;  // yp F_bottom - ym F_top, in a form whose terms share one sign
-    if (yp > 0.0 && ym < 0.0)
-        bz_x = yp * f_bottom - ym * f_top;
-    else if (ym >= 0.0)
-        bz_x = 2.0 * b * f_bottom + 4.0 * y * b * ym * sx.dd;
-    else
-        bz_x = 2.0 * b * f_top + 4.0 * y * b * yp * sx.dd;
-    double bz_y;  // xp F_left - xm F_right
-    if (xp > 0.0 && xm < 0.0)
-        bz_y = xp * f_left - xm * f_right;
-    else if (xm >= 0.0)
-        bz_y = 2.0 * a * f_left + 4.0 * x * a * xm * sy.dd;
-    else
-        bz_y = 2.0 * a * f_right + 4.0 * x * a * xp * sy.dd;
+    const double bz_x = opposite_sides(yp, ym, f_bottom, f_top, b, y, sx.dd);  // yp F_bottom - ym F_top
+    const double bz_y = opposite_sides(xp, xm, f_left, f_right, a, x, sy.dd);    // xp F_left - xm F_right
     return {-4.0 * a * x * z * sy.dd, -4.0 * b * y * z * sx.dd, bz_x + bz_y};
 }
 

@@ -54,8 +54,7 @@ using namespace internal;
 void validate(const SolenoidSpec& solenoid) {
     check::positive(solenoid.radius, "radius");
     check::positive(solenoid.length, "length");
-    check::non_negative(solenoid.turns, "turns");
-    check::finite(solenoid.current, "current");
+    check::turns_and_current(solenoid.turns, solenoid.current);
 }
 
 namespace internal {

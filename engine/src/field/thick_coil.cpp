@@ -30,8 +30,7 @@ using namespace internal;
 void validate(const ThickCoilSpec& coil) {
     check::radial_extent(coil.inner_radius, coil.outer_radius);
     check::positive(coil.length, "length");
-    check::non_negative(coil.turns, "turns");
-    check::finite(coil.current, "current");
+    check::turns_and_current(coil.turns, coil.current);
 }
 
 namespace internal {

@@ -25,6 +25,12 @@ inline double non_negative(double v, const char* name) {
     return v;
 }
 
+// What drives a winding: turns >= 0 and a finite current (any sign).
+inline void turns_and_current(double turns, double current) {
+    non_negative(turns, "turns");
+    finite(current, "current");
+}
+
 // The radial extent of a winding: both radii finite and > 0, outer >= inner. `which` prefixes
 // the messages (e.g. "coil 1 "); they are built only on failure, so this costs nothing on the
 // field functions' hot path.
