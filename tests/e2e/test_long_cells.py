@@ -1,0 +1,44 @@
+"""Cells that once froze LibreOffice (issue: nothing a user types may freeze or kill it), typed
+into real Calc. Each must come back as a value or an error cell; the time each takes is printed
+by bench/calc_long_cells.py (speed is measured there, not asserted here)."""
+import unittest
+
+from e2e_support import CalcTestCase
+
+# Found in real Calc: the sheet kernel's copy of the elliptic-integral iteration had no step cap,
+# and a 1e308 m solenoid sent it spinning for ever (no answer after 120 s).
+SOLENOID_HANG = "=SOLENOID_BZ(1E308;2;1;1;1+2^-51;1E308)"
+
+# Single cells that held Calc for 10-17 s (thick-coil force over 3999 points, the thick-coil
+# field over 2 million points within a micrometre of a winding corner, inductance over 3999
+# cells); now fast enough, or ended by the work bound or the call deadline with an error.
+LONG_CELLS = [
+    "=SUMPRODUCT(COIL_FZ(0.05;0.07;0.02;100;1;0.05;0.07;0.02;100;1;0.05+ROW($A$1:$A$3999)*1E-7))",
+    "=SUMPRODUCT(COIL_B(0.05;0.08;0.1;800;3;0.05+ROW($A$1:$A$2000)*1E-9;0.08+COLUMN($A$1:$ALL$1)*1E-9))",
+    "=SUMPRODUCT(COIL_L(0.05;0.08;0.1+ROW($A$1:$A$3999)*1E-6;800))",
+]
+
+
+class LongCells(CalcTestCase):
+    def assert_value_or_error(self, formula):
+        cell = self.formula("A1", formula)
+        self.assertTrue(cell.getError() in (0, 502, 523), f"{formula} gave Err:{cell.getError()}")
+        if cell.getError() == 0:
+            self.assertTrue(abs(cell.getValue()) < float("inf"))
+        self.assertTrue(self.session.alive(), f"LibreOffice died on {formula}")
+        return cell
+
+    def test_the_solenoid_that_froze_calc_is_an_error(self):
+        cell = self.assert_value_or_error(SOLENOID_HANG)
+        self.assertEqual(cell.getError(), 502)
+        reason = self.formula("B1", '=CALL_CHECK("SOLENOID_BZ";1E308;2;1;1;1+2^-51;1E308)').getString()
+        self.assertTrue(reason.startswith("Err:502: "), reason)
+
+    def test_cells_that_held_calc_for_seconds_come_back(self):
+        for formula in LONG_CELLS:
+            with self.subTest(formula=formula):
+                self.assert_value_or_error(formula)
+
+
+if __name__ == "__main__":
+    unittest.main()
