@@ -19,6 +19,10 @@ RESULT_FILL = 0xE6F0FA   # what Coilwright computes
 HEADER_FILL = 0x2F4F6F
 CAUTION_FILL = 0xFDE9E7
 BOLD = 150.0
+EMPTY = uno.Enum("com.sun.star.table.CellContentType", "EMPTY")
+TEXT = uno.Enum("com.sun.star.table.CellContentType", "TEXT")
+FORMULA = uno.Enum("com.sun.star.table.CellContentType", "FORMULA")
+TEXT_RESULT = 2  # com.sun.star.sheet.FormulaResult.STRING
 
 
 def _col_index(letters):
@@ -184,6 +188,35 @@ class Sheet:
         return doc
 
 
+def _shows_text(cell):
+    """A text or a formula with a text result: it may overflow into empty cells to its right."""
+    return cell.getType() == TEXT or (cell.getType() == FORMULA and cell.FormulaResultType2 == TEXT_RESULT)
+
+
+def _room_to_the_right(sheet, col, row, last_col):
+    """Width (1/100 mm) of the empty cells right of (col, row), up to the next taken cell or the
+    last used column (the printed area ends there)."""
+    room = 0
+    while col < last_col:
+        col += 1
+        if sheet.getCellByPosition(col, row).getType() != EMPTY:
+            break
+        room += sheet.Columns.getByIndex(col).Width
+    return room
+
+
+def _extend_fill(sheet, col, row, width):
+    """Paint the header fill over the empty cells a header's text runs into."""
+    covered = sheet.Columns.getByIndex(col).Width
+    while covered < width:
+        col += 1
+        nxt = sheet.getCellByPosition(col, row)
+        if nxt.getType() != EMPTY:
+            break
+        nxt.CellBackColor = HEADER_FILL
+        covered += sheet.Columns.getByIndex(col).Width
+
+
 class Book:
     def __init__(self, session):
         self.session = session
@@ -246,8 +279,53 @@ class Book:
         info.Title = title
         info.Description = description
 
+    def fit_columns(self):
+        """Widen every column to its optimal width over the cells that must fit in it, so that
+        printed labels, units and numbers are whole: numbers, wrapped texts and texts whose
+        right neighbour is taken (a text overflows only into empty cells). A header (white on
+        the header fill) that overflows gets the fill over the cells its text runs into."""
+        sheets = self.doc.Sheets
+        sheets.insertNewByName("__fit", sheets.getCount())
+        scratch = sheets.getByName("__fit")
+        probe = scratch.getCellByPosition(0, 0)
+        probe_column = scratch.Columns.getByIndex(0)
+
+        def text_width(cell):
+            probe.setString(cell.getString())
+            probe.CharHeight, probe.CharWeight = cell.CharHeight, cell.CharWeight
+            probe_column.Width = 100
+            probe_column.OptimalWidth = True
+            return probe_column.Width
+
+        try:
+            for name in self._sheets:
+                sheet = sheets.getByName(name)
+                cursor = sheet.createCursor()
+                cursor.gotoEndOfUsedArea(False)
+                end = cursor.getRangeAddress()
+                columns = sheet.Columns
+                for row in range(end.EndRow + 1):
+                    for col in range(end.EndColumn + 1):
+                        cell = sheet.getCellByPosition(col, row)
+                        if cell.getType() == EMPTY or not cell.getString() or cell.IsTextWrapped:
+                            continue
+                        width = text_width(cell)
+                        column = columns.getByIndex(col)
+                        if _shows_text(cell):
+                            # It may run over the empty cells to its right: widen its own column
+                            # by what they lack.
+                            room = _room_to_the_right(sheet, col, row, end.EndColumn)
+                            if cell.CellBackColor == HEADER_FILL:
+                                _extend_fill(sheet, col, row, width)
+                            width -= room
+                        if width > 0:
+                            column.Width = max(column.Width, width)
+        finally:
+            sheets.removeByName("__fit")
+
     def save(self, path):
         self.doc.calculateAll()
+        self.fit_columns()
         url = uno.systemPathToFileUrl(str(path))
         self.doc.storeToURL(url, props(FilterName="calc8"))
 
