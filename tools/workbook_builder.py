@@ -19,6 +19,16 @@ RESULT_FILL = 0xE6F0FA   # what Coilwright computes
 HEADER_FILL = 0x2F4F6F
 CAUTION_FILL = 0xFDE9E7
 BOLD = 150.0
+
+# What every coil's workbook says under its own cautions.
+GENERAL_CAUTIONS = [
+    "For every coil: a hot winding burns (guard its surface and let it cool); the supply can give a shock",
+    "(cover live parts, switch off first); interrupting the current makes a flyback voltage (clamp it below",
+    "the insulation's voltage rating); the field pulls loose ferromagnetic objects into the coil (keep them,",
+    "and hands, out of the bore while it is energised); compare fields where people stand, static, pulsed",
+    "or AC, with the exposure and implant limits of the standard that applies at your site. Defer to local",
+    "codes and licensed practice, and have designs that carry real power reviewed.",
+]
 EMPTY = uno.Enum("com.sun.star.table.CellContentType", "EMPTY")
 TEXT = uno.Enum("com.sun.star.table.CellContentType", "TEXT")
 FORMULA = uno.Enum("com.sun.star.table.CellContentType", "FORMULA")
@@ -120,10 +130,11 @@ class Sheet:
         return self.text(cell, text, bold=True, fill=HEADER_FILL, color=0xFFFFFF)
 
     def cautions(self, row, lines, width_cols="A:F"):
+        """The workbook's own cautions, then those every coil needs (GENERAL_CAUTIONS)."""
         self.text(f"A{row}", "Cautions", bold=True, fill=CAUTION_FILL)
-        for i, line in enumerate(lines, start=1):
+        for i, line in enumerate(list(lines) + GENERAL_CAUTIONS, start=1):
             self.text(f"A{row + i}", line, fill=CAUTION_FILL)
-        return row + len(lines) + 1
+        return row + len(lines) + len(GENERAL_CAUTIONS) + 1
 
     def comment(self, cell, text):
         col, row = split_cell(cell)
