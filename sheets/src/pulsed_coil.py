@@ -43,12 +43,12 @@ def build(book):
     s.text("B20", "F", fill=0xFFF5CC)
     s.define_name("ins_class", "B20")
     s.input(21, "Specific heat of copper", "c_cu", 385, "J/(kg K)",
-            "pure copper at 300 K (Incropera et al., Fundamentals of Heat and Mass Transfer, table A.1)", fmt="0")
+            "pure copper, 300 K (Incropera, Heat and Mass Transfer, table A.1)", fmt="0")
     s.input(22, "SITE INPUT: field limit for implant wearers", "implant_mT", 0.5, "mT",
-            "DEMO VALUE (0.5 mT is common practice for pacemakers): enter the limit of the standard your site applies",
+            "DEMO VALUE (common practice): enter the limit of your site's standard",
             fmt="0.00")
     s.input(23, "Voltage rating of the winding's insulation", "ins_v", 500, "V",
-            "from the wire's or the former's data sheet (demo value)", fmt="0")
+            "wire or former data sheet (demo value)", fmt="0")
 
     s.header("A24", "Winding")
     s.result(25, "Bare wire diameter", "wire_d", "=AWG_DIAMETER(gauge)", "m", "ASTM B258", fmt="0.000000")
@@ -100,9 +100,9 @@ def build(book):
     s.result(50, "Flat-top voltage (hot)", "v_flat", "=COIL_VOLTAGE(r_hot;i_set)", "V", "", fmt="0.00")
     s.check(51, "Driver check", "v_flat<supply_v", "compliance suffices", "DRIVER TOO WEAK")
     s.result(52, "Voltage across the winding at turn-off", "v_off", "=clamp_v", "V",
-             "the clamp holds L di/dt there; without it the voltage rises until something breaks down", fmt="0.0")
+             "the clamp holds L di/dt there", fmt="0.0")
     s.check(53, "Insulation voltage check", "v_off<=ins_v", "rating suffices", "INSULATION TOO WEAK",
-            "clamp voltage against the insulation's voltage rating")
+            "clamp voltage against the rating")
 
     s.header("A55", "Heating")
     s.result(56, "RMS current (upper bound)", "i_rms", "=i_set*SQRT((t_rise+t_flat+t_fall)/period)", "A",
@@ -123,12 +123,12 @@ def build(book):
              fmt="0.00")
     s.result(64, "Temperature step within one pulse", "dt_pulse",
              "=COIL_PULSE_TEMPERATURE_RISE(r_cold;i_set;t_rise+t_flat+t_fall;heat_cap;t_hot)", "K",
-             "adiabatic from the steady temperature, resistance rising with it", fmt="0.000")
+             "adiabatic, from the steady temperature", fmt="0.000")
     s.input(65, "Radial thermal conductivity of the winding", "k_wind", 0.7, "W/(m K)",
-            "varnished round wire: 0.5 to 1 measured (J. Thermal Sci. Eng. Appl. 2017); demo value", fmt="0.00")
+            "demo; varnished round wire measures 0.5 to 1", fmt="0.00")
     s.result(66, "Hot spot above the winding's surface", "hotspot",
              "=COIL_HOTSPOT_RISE(inner;outer;length;i_rms^2*r_hot;k_wind)", "K",
-             "conduction to the outer surface (bore on the former: no cooling)", fmt="0.00")
+             "conduction to the outer surface", fmt="0.00")
     s.result(67, "Margin to the insulation class", "margin", "=INSULATION_MARGIN(ins_class;t_hot+dt_pulse;hotspot)",
              "K", "hottest point: steady + one pulse + hot spot", fmt="0.0")
     s.check(68, "Temperature check", "margin>=0", "within class", "TOO HOT")

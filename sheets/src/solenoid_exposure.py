@@ -36,7 +36,7 @@ def build(book):
     s.text("B16", "F", fill=0xFFF5CC)
     s.define_name("ins_class", "B16")
     s.input(17, "SITE INPUT: field limit for implant wearers", "implant_mT", 0.5, "mT",
-            "DEMO VALUE (0.5 mT is common practice for pacemakers): enter the limit of the standard your site applies",
+            "DEMO VALUE (common practice): enter the limit of your site's standard",
             fmt="0.00")
 
     s.header("A19", "Winding")
