@@ -44,7 +44,8 @@ class WindingHeatInCalc(CalcTestCase):
     def test_pulse_is_iec_60949_adiabatic(self):
         # 1 m of 1 mm^2 copper (R20 = 1/58 ohm, IEC 60028; heat capacity 3.45 J/K from IEC 60949's
         # 3.45e6 J/(K m^3)), 100 A for 1 s from 20 C. IEC 60949 adiabatic formula with copper's
-        # K = 226 A s^0.5/mm^2, beta = 234.5 K (quoted from memory of the standard; rounded): 0.5 %.
+        # K = 226 A s^0.5/mm^2, beta = 234.5 K (as published summaries of the standard quote them;
+        # rounded): 0.5 %.
         rise = self.value("A1", "=COIL_PULSE_TEMPERATURE_RISE(1/58;100;1;3.45;20)")
         iec = (20 + 234.5) * math.exp(100 ** 2 / 226 ** 2) - 234.5 - 20
         self.assertLess(abs(rise / iec - 1), 5e-3, f"{rise} against {iec}")

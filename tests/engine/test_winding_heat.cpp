@@ -112,9 +112,10 @@ TEST(WindingWarmUp, RunawayIsFollowedUntil400CThenAnError) {
 
 TEST(PulseRise, IsTheAdiabaticFormulaOfIec60949) {
     // 1 m of 1 mm^2 copper: R20 = 1/58 ohm (IEC 60028), heat capacity 3.45e6 J/(K m^3) * 1e-6 m^3
-    // (IEC 60949's volumetric specific heat of copper), 100 A for 1 s from 20 C.
+    // (IEC 60949's volumetric specific heat of copper, quoted from memory; with it and rho20, beta
+    // the standard's K = sqrt(sigma (beta + 20) / rho20) comes out at 225.7), 100 A for 1 s from 20 C.
     // IEC 60949:1988, adiabatic: I^2 t = K^2 S^2 ln((Tf + beta)/(Ti + beta)), copper K = 226
-    // A s^0.5/mm^2, beta = 234.5 K (values quoted from memory of the standard; K and beta are
+    // A s^0.5/mm^2, beta = 234.5 K (as published summaries of the standard quote them; K and beta are
     // rounded, our beta = 1/alpha - 20 = 234.45 K): agreement to 0.5 % of the rise.
     const double r20 = 1.0 / 58.0, c = 3.45, i = 100.0;
     const double rise = pulse_temperature_rise(r20, i, 1.0, c, 20.0, kCu);
