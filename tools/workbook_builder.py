@@ -20,6 +20,20 @@ HEADER_FILL = 0x2F4F6F
 CAUTION_FILL = 0xFDE9E7
 BOLD = 150.0
 
+# What every coil's workbook says under its own cautions.
+GENERAL_CAUTIONS = [
+    "For every coil: a hot winding burns (guard its surface and let it cool); the supply can give a shock",
+    "(cover live parts, switch off first); interrupting the current makes a flyback voltage (clamp it below",
+    "the insulation's voltage rating); the field pulls loose ferromagnetic objects into the coil (keep them,",
+    "and hands, out of the bore while it is energised); compare fields where people stand, static, pulsed",
+    "or AC, with the exposure and implant limits of the standard that applies at your site. Defer to local",
+    "codes and licensed practice, and have designs that carry real power reviewed.",
+]
+EMPTY = uno.Enum("com.sun.star.table.CellContentType", "EMPTY")
+TEXT = uno.Enum("com.sun.star.table.CellContentType", "TEXT")
+FORMULA = uno.Enum("com.sun.star.table.CellContentType", "FORMULA")
+TEXT_RESULT = 2  # com.sun.star.sheet.FormulaResult.STRING
+
 
 def _col_index(letters):
     n = 0
@@ -116,10 +130,11 @@ class Sheet:
         return self.text(cell, text, bold=True, fill=HEADER_FILL, color=0xFFFFFF)
 
     def cautions(self, row, lines, width_cols="A:F"):
+        """The workbook's own cautions, then those every coil needs (GENERAL_CAUTIONS)."""
         self.text(f"A{row}", "Cautions", bold=True, fill=CAUTION_FILL)
-        for i, line in enumerate(lines, start=1):
+        for i, line in enumerate(list(lines) + GENERAL_CAUTIONS, start=1):
             self.text(f"A{row + i}", line, fill=CAUTION_FILL)
-        return row + len(lines) + 1
+        return row + len(lines) + len(GENERAL_CAUTIONS) + 1
 
     def comment(self, cell, text):
         col, row = split_cell(cell)
@@ -184,6 +199,35 @@ class Sheet:
         return doc
 
 
+def _shows_text(cell):
+    """A text or a formula with a text result: it may overflow into empty cells to its right."""
+    return cell.getType() == TEXT or (cell.getType() == FORMULA and cell.FormulaResultType2 == TEXT_RESULT)
+
+
+def _room_to_the_right(sheet, col, row, last_col):
+    """Width (1/100 mm) of the empty cells right of (col, row), up to the next taken cell or the
+    last used column (the printed area ends there)."""
+    room = 0
+    while col < last_col:
+        col += 1
+        if sheet.getCellByPosition(col, row).getType() != EMPTY:
+            break
+        room += sheet.Columns.getByIndex(col).Width
+    return room
+
+
+def _extend_fill(sheet, col, row, width):
+    """Paint the header fill over the empty cells a header's text runs into."""
+    covered = sheet.Columns.getByIndex(col).Width
+    while covered < width:
+        col += 1
+        nxt = sheet.getCellByPosition(col, row)
+        if nxt.getType() != EMPTY:
+            break
+        nxt.CellBackColor = HEADER_FILL
+        covered += sheet.Columns.getByIndex(col).Width
+
+
 class Book:
     def __init__(self, session):
         self.session = session
@@ -246,8 +290,53 @@ class Book:
         info.Title = title
         info.Description = description
 
+    def fit_columns(self):
+        """Widen every column to its optimal width over the cells that must fit in it, so that
+        printed labels, units and numbers are whole: numbers, wrapped texts and texts whose
+        right neighbour is taken (a text overflows only into empty cells). A header (white on
+        the header fill) that overflows gets the fill over the cells its text runs into."""
+        sheets = self.doc.Sheets
+        sheets.insertNewByName("__fit", sheets.getCount())
+        scratch = sheets.getByName("__fit")
+        probe = scratch.getCellByPosition(0, 0)
+        probe_column = scratch.Columns.getByIndex(0)
+
+        def text_width(cell):
+            probe.setString(cell.getString())
+            probe.CharHeight, probe.CharWeight = cell.CharHeight, cell.CharWeight
+            probe_column.Width = 100
+            probe_column.OptimalWidth = True
+            return probe_column.Width
+
+        try:
+            for name in self._sheets:
+                sheet = sheets.getByName(name)
+                cursor = sheet.createCursor()
+                cursor.gotoEndOfUsedArea(False)
+                end = cursor.getRangeAddress()
+                columns = sheet.Columns
+                for row in range(end.EndRow + 1):
+                    for col in range(end.EndColumn + 1):
+                        cell = sheet.getCellByPosition(col, row)
+                        if cell.getType() == EMPTY or not cell.getString() or cell.IsTextWrapped:
+                            continue
+                        width = text_width(cell)
+                        column = columns.getByIndex(col)
+                        if _shows_text(cell):
+                            # It may run over the empty cells to its right: widen its own column
+                            # by what they lack.
+                            room = _room_to_the_right(sheet, col, row, end.EndColumn)
+                            if cell.CellBackColor == HEADER_FILL:
+                                _extend_fill(sheet, col, row, width)
+                            width -= room
+                        if width > 0:
+                            column.Width = max(column.Width, width)
+        finally:
+            sheets.removeByName("__fit")
+
     def save(self, path):
         self.doc.calculateAll()
+        self.fit_columns()
         url = uno.systemPathToFileUrl(str(path))
         self.doc.storeToURL(url, props(FilterName="calc8"))
 

@@ -149,7 +149,7 @@ def build(book):
         "The exposure limit is a site input: enter the value of the guideline that applies to your site",
         "and this frequency, and keep people out of the zone where the field exceeds it (rows above).",
         "Fields near pacemakers and other implants: keep implant wearers away. Coils heat: check the",
-        "temperature in service against the insulation class. Follow local codes and licensed practice.",
+        "temperature in service against the insulation class.",
     ])
 
     charts = book.sheet("Charts")

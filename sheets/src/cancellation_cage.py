@@ -137,7 +137,7 @@ def build(book):
         "reinforcement) bends it: measure at several points with the cage off, and again with it on.",
         "The ambient field drifts (traffic, lifts, the day's variation): a fixed current cancels one moment.",
         "Coils heat; keep the winding under its insulation class. Switching the current of a large cage",
-        "makes a voltage spike: ramp it or provide a flyback path. Follow local codes and licensed practice.",
+        "makes a voltage spike: ramp it or provide a flyback path.",
     ])
 
     charts = book.sheet("Charts")

@@ -92,7 +92,8 @@ def build(book):
     s.cautions(46, [
         "The coils push apart with the force above: the former and clamps must hold it. Coils heat: keep the",
         "winding under its insulation class. Opening the circuit at full current makes a flyback spike:",
-        "use a flyback diode or a controlled ramp. Follow local codes and licensed practice.",
+        "use a flyback diode or a controlled ramp. The winding runs hot on an open bench (the temperature",
+        "above): guard it against touch and keep it off flammable surfaces.",
     ])
 
     charts = book.sheet("Charts")

@@ -137,8 +137,7 @@ def build(book):
         "Coils heat: keep the winding under its insulation class (IEC 60085); the temperature here is a",
         "first estimate for still air. Switching the supply off under load makes a flyback voltage: use a",
         "supply with a controlled ramp or a flyback diode. Fields here are small, but keep strong fields",
-        "away from pacemakers and other implants (a common guideline: 0.5 mT). Follow local codes and",
-        "licensed practice.",
+        "away from pacemakers and other implants, below the limit the standard at your site sets.",
     ])
 
     charts = book.sheet("Charts")

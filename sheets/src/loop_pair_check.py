@@ -68,7 +68,7 @@ def build(book):
 
     s.cautions(40, [
         "Fields of this size are harmless, but the same sheet scales to strong coils: keep fields near",
-        "pacemakers and other implants below the limits your site applies (0.5 mT is a common guideline).",
+        "pacemakers and other implants below the limits of the standard your site applies.",
         "Coils heat; check the winding against its insulation class. Interrupting the current of a coil",
-        "makes a voltage spike: use a flyback path. Follow local codes and licensed practice.",
+        "makes a voltage spike: use a flyback path.",
     ])

@@ -3,8 +3,10 @@
 Requirement: 50 mT pulses at the centre of a 40 mm bore, uniform to 1 % over an 8 mm sensor,
 50 ms flat top once every 2 s, from a current-regulated driver with 48 V of compliance and a
 100 V clamp for turn-off. The sheet sizes the winding, then follows one pulse: rise and fall
-times, stored energy against the clamp's rating, heat per pulse and on average, the force that
-presses the two halves of the winding together, and the stray field against an implant guideline.
+times, stored energy against the clamp's rating, the clamp voltage against the insulation's voltage
+rating, heat per pulse (adiabatic) and on average, the warm-up, the hot spot by conduction through the
+winding, the force that presses the two halves of the winding together, and the stray field against
+the site's limit for implant wearers.
 """
 
 TITLE = "Pulsed test coil"
@@ -40,10 +42,13 @@ def build(book):
     s.text("A20", "Insulation thermal class")
     s.text("B20", "F", fill=0xFFF5CC)
     s.define_name("ins_class", "B20")
-    s.input(21, "Specific heat of copper", "c_cu", 385, "J/(kg K)", "handbook value at room temperature (from memory)",
-            fmt="0")
-    s.input(22, "Implant guideline", "implant_mT", 0.5, "mT", "a common guideline for pacemakers (from memory)",
+    s.input(21, "Specific heat of copper", "c_cu", 385, "J/(kg K)",
+            "pure copper, 300 K (Incropera, Heat and Mass Transfer, table A.1)", fmt="0")
+    s.input(22, "SITE INPUT: field limit for implant wearers", "implant_mT", 0.5, "mT",
+            "DEMO VALUE (common practice): enter the limit of your site's standard",
             fmt="0.00")
+    s.input(23, "Voltage rating of the winding's insulation", "ins_v", 500, "V",
+            "wire or former data sheet (demo value)", fmt="0")
 
     s.header("A24", "Winding")
     s.result(25, "Bare wire diameter", "wire_d", "=AWG_DIAMETER(gauge)", "m", "ASTM B258", fmt="0.000000")
@@ -94,38 +99,53 @@ def build(book):
     s.check(49, "Clamp check", "energy<=clamp_j", "clamp rating suffices", "CLAMP TOO SMALL")
     s.result(50, "Flat-top voltage (hot)", "v_flat", "=COIL_VOLTAGE(r_hot;i_set)", "V", "", fmt="0.00")
     s.check(51, "Driver check", "v_flat<supply_v", "compliance suffices", "DRIVER TOO WEAK")
+    s.result(52, "Voltage across the winding at turn-off", "v_off", "=clamp_v", "V",
+             "the clamp holds L di/dt there", fmt="0.0")
+    s.check(53, "Insulation voltage check", "v_off<=ins_v", "rating suffices", "INSULATION TOO WEAK",
+            "clamp voltage against the rating")
 
-    s.header("A53", "Heating")
-    s.result(54, "RMS current (upper bound)", "i_rms", "=i_set*SQRT((t_rise+t_flat+t_fall)/period)", "A",
+    s.header("A55", "Heating")
+    s.result(56, "RMS current (upper bound)", "i_rms", "=i_set*SQRT((t_rise+t_flat+t_fall)/period)", "A",
              "full current from switch-on to the end of the fall", fmt="0.000")
-    s.result(55, "Cooling area", "area", "=COIL_COOLING_AREA(inner;outer;length)", "m^2", "outer surface and ends",
+    s.result(57, "Cooling area", "area", "=COIL_COOLING_AREA(inner;outer;length)", "m^2", "outer surface and ends",
              fmt="0.00000")
-    s.result(56, "Steady winding temperature", "t_hot", "=COIL_HOT_TEMPERATURE(r_cold;i_rms;area;ambient;h_conv)",
+    s.result(58, "Steady winding temperature", "t_hot", "=COIL_HOT_TEMPERATURE(r_cold;i_rms;area;ambient;h_conv)",
              "C", "pulses averaged", fmt="0.0")
-    s.result(57, "Hot resistance", "r_hot", "=COIL_HOT_RESISTANCE(r_cold;i_rms;area;ambient;h_conv)", "ohm", "",
+    s.result(59, "Hot resistance", "r_hot", "=COIL_HOT_RESISTANCE(r_cold;i_rms;area;ambient;h_conv)", "ohm", "",
              fmt="0.000")
-    s.result(58, "Heat of one pulse (upper bound)", "e_pulse", "=i_set^2*r_hot*(t_rise+t_flat+t_fall)", "J", "",
+    s.result(60, "Copper mass", "mass", "=WIRE_MASS(wire_d;wire_len)", "kg", "", fmt="0.000")
+    s.result(61, "Heat capacity of the copper", "heat_cap", "=mass*c_cu", "J/K", "former and varnish left out",
+             fmt="0.0")
+    s.result(62, "Winding temperature 10 minutes after the start", "t_10min",
+             "=COIL_TEMPERATURE_AT_TIME(r_cold;i_rms;area;heat_cap;600;ambient;h_conv)", "C",
+             "from cold, pulses averaged", fmt="0.0")
+    s.result(63, "Heat of one pulse (upper bound)", "e_pulse", "=i_set^2*r_hot*(t_rise+t_flat+t_fall)", "J", "",
              fmt="0.00")
-    s.result(59, "Copper mass", "mass", "=WIRE_MASS(wire_d;wire_len)", "kg", "", fmt="0.000")
-    s.result(60, "Temperature step within one pulse", "dt_pulse", "=e_pulse/(mass*c_cu)", "K",
-             "no time for the heat to leave the copper", fmt="0.000")
-    s.result(61, "Margin to the insulation class", "margin", "=INSULATION_MARGIN(ins_class;t_hot+dt_pulse)", "K",
-             "after a 10 K hot-spot allowance", fmt="0.0")
-    s.check(62, "Temperature check", "margin>=0", "within class", "TOO HOT")
+    s.result(64, "Temperature step within one pulse", "dt_pulse",
+             "=COIL_PULSE_TEMPERATURE_RISE(r_cold;i_set;t_rise+t_flat+t_fall;heat_cap;t_hot)", "K",
+             "adiabatic, from the steady temperature", fmt="0.000")
+    s.input(65, "Radial thermal conductivity of the winding", "k_wind", 0.7, "W/(m K)",
+            "demo; varnished round wire measures 0.5 to 1", fmt="0.00")
+    s.result(66, "Hot spot above the winding's surface", "hotspot",
+             "=COIL_HOTSPOT_RISE(inner;outer;length;i_rms^2*r_hot;k_wind)", "K",
+             "conduction to the outer surface", fmt="0.00")
+    s.result(67, "Margin to the insulation class", "margin", "=INSULATION_MARGIN(ins_class;t_hot+dt_pulse;hotspot)",
+             "K", "hottest point: steady + one pulse + hot spot", fmt="0.0")
+    s.check(68, "Temperature check", "margin>=0", "within class", "TOO HOT")
 
-    s.header("A64", "Forces at the flat top")
-    s.result(65, "Axial force on the upper half", "f_half", "=INDEX(STACK_FZ(coils);2;1)", "N",
+    s.header("A70", "Forces at the flat top")
+    s.result(71, "Axial force on the upper half", "f_half", "=INDEX(STACK_FZ(coils);2;1)", "N",
              "negative: the halves press together", fmt="0.000")
-    s.result(66, "Magnetic pressure on the winding", "pressure",
+    s.result(72, "Magnetic pressure on the winding", "pressure",
              "=SOLENOID_PRESSURE((inner+outer)/2;length;turns;i_set)", "Pa", "outward, mean radius", fmt="0")
 
-    s.header("A68", "Stray field along the axis (implant guideline)")
-    for row, z in zip(range(69, 73), (0.1, 0.15, 0.2, 0.3)):
+    s.header("A74", "Stray field along the axis (site limit for implant wearers)")
+    for row, z in zip(range(75, 79), (0.1, 0.15, 0.2, 0.3)):
         s.value(f"A{row}", z, "0.00")
         s.formula(f"B{row}", f"=STACK_B(coils;A{row})*1000", fmt="0.000", fill=0xE6F0FA)
         s.text(f"C{row}", "mT")
-        s.formula(f"D{row}", f'=IF(B{row}>implant_mT;"above the guideline: keep implant wearers out";"below the guideline")')
-    s.text("A73", "(z in m from the centre along the axis, during the flat top)", color=0x555555)
+        s.formula(f"D{row}", f'=IF(B{row}>implant_mT;"above the site limit: keep implant wearers out";"below the site limit")')
+    s.text("A79", "(z in m from the centre along the axis, during the flat top)", color=0x555555)
 
     s.header("F9", "Axial table")
     for col, text in zip("FGH", ("z (m)", "Bz (mT)", "B/B0 - 1 (%)")):
@@ -168,14 +188,15 @@ def build(book):
             f"(i_set+clamp_v/r_cold)*EXP(-I{a}:I{b}/1000/tau)-clamp_v/r_cold;0)", fmt="0.000")
     s.array(f"K{a}:K{b}", f"=IF(J{a}:J{b}>0;-clamp_v;0)", fmt="0")
 
-    s.cautions(75, [
+    s.cautions(81, [
         "Every turn-off drives the coil's stored energy into the clamp: without a working clamp or",
         "flyback path the voltage rises until something breaks down, so never open the circuit at",
-        "current, and size the suppressor for the energy and the repetition rate. The flat-top field",
-        "is 100 times a common implant guideline (0.5 mT): mark the area and keep implant wearers out",
-        "(see the stray-field rows). Pulses heat the winding on average and within each pulse: check",
-        "the temperature in service against the insulation class. Forces press the winding halves",
-        "together at every pulse: bond or clamp the layers. Follow local codes and licensed practice.",
+        "current, size the suppressor for the energy and the repetition rate, and keep its voltage",
+        "below the insulation's rating (the check above). The flat-top field is 100 times the demo",
+        "implant limit: mark the area and keep implant wearers out (see the stray-field rows). Pulses",
+        "heat the winding on average and within each pulse: check the temperature in service against",
+        "the insulation class. Forces press the winding halves together at every pulse: bond or clamp",
+        "the layers.",
     ])
 
     charts = book.sheet("Charts")

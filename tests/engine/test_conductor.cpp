@@ -48,8 +48,10 @@ TEST(Conductor, CopperIsIec60028AnnealedCopper) {
 }
 
 TEST(Conductor, AluminiumIsIec60889Wire) {
-    // IEC 60889 (hard-drawn aluminium wire): 0.028264 ohm mm^2/m at 20 C, 0.00403 /K,
-    // 2.703 g/cm^3 (from memory of the standard).
+    // IEC 60889 (hard-drawn aluminium wire): 0.028264 ohm mm^2/m at 20 C (61 % IACS) and
+    // 0.00403 /K, as tabulated for commercial-purity aluminium in K. C. Agrawal, Industrial Power
+    // Engineering and Applications Handbook (2001), table of conductor metals; 2.703 g/cm^3 from
+    // memory of the standard.
     EXPECT_LT(rel(resistivity(Conductor::Aluminium, 20.0), 0.028264e-6), 1e-15);
     EXPECT_LT(rel(resistivity(Conductor::Aluminium, -30.0), 0.028264e-6 * (1 - 0.00403 * 50)), 1e-15);
     EXPECT_NEAR(conductor_data(Conductor::Aluminium).density, 2703.0, 0.0);

@@ -220,6 +220,11 @@ const EntryPoint kEntryPoints[] = {
     ENTRY(insulation_margin, finite(insulation_margin(N, N, N), "insulation_margin")),
     ENTRY(coil_energy, finite(coil_energy(N, N), "coil_energy")),
     ENTRY(coil_time_constant, finite(coil_time_constant(N, N), "coil_time_constant")),
+    ENTRY(winding_hotspot_rise, finite(winding_hotspot_rise(N, N, N, N, N, static_cast<CooledSurfaces>(in.below(3))),
+                                       "winding_hotspot_rise")),
+    ENTRY(coil_temperature_at_time,
+          finite(coil_temperature_at_time(N, N, N, N, N, N, N, conductor(in)), "coil_temperature_at_time")),
+    ENTRY(pulse_temperature_rise, finite(pulse_temperature_rise(N, N, N, N, N, conductor(in)), "pulse_temperature_rise")),
     // ac
     ENTRY(skin_depth, finite(skin_depth(N, conductor(in), N), "skin_depth")),
     ENTRY(wire_rac_ratio, finite(wire_rac_ratio(N, N, conductor(in), N), "wire_rac_ratio")),

@@ -8,3 +8,4 @@
 #include "coilwright/wire/conductor.hpp"
 #include "coilwright/wire/gauge.hpp"
 #include "coilwright/wire/winding.hpp"
+#include "coilwright/wire/winding_heat.hpp"
