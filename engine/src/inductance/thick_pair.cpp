@@ -10,10 +10,9 @@
 // a gap g (radial and axial gaps combined), that is at cos(phi) >= cosh(delta),
 // delta = acosh(1 + g^2 / (2 b1 b2)), and the midpoint rule in phi (Gauss-Chebyshev in
 // cos(phi)) converges like exp(-2 n delta) (Trefethen, Approximation Theory and Approximation
-// Practice, SIAM 2013, ch. 19): n = 16 / delta nodes. When the cross-sections touch or overlap,
-// T has a weak singularity at phi = 0 (like phi, phi^2 log phi): phi = pi v^3 smooths it and
-// 30-point Gauss-Legendre in v gives about 1e-14 (measured against the extended-precision
-// references of tests/reference/winding_inductance.csv).
+// Practice, SIAM 2013, ch. 19): n = 16 / delta nodes while that is at most 32. Nearer, and when
+// the cross-sections touch or overlap (T then has a weak singularity at phi = 0 itself, like
+// phi or phi^2 log phi), graded Gauss-Legendre (graded_rule below).
 //
 // The corner sums cancel: the primitive is of the size of the largest length to the fifth
 // power, the result of the product of the four extents. The same quadrature sums the absolute
@@ -23,19 +22,23 @@
 
 #include <algorithm>
 #include <array>
-#include <boost/math/quadrature/gauss.hpp>
 #include <cmath>
 
 #include "coilwright/constants.hpp"
 #include "inductance/rectangular_primitive.hpp"
+#include "numerics/gauss_legendre.hpp"
 
 namespace coilwright::internal {
 
 namespace {
 
-// Loss allowed to the corner sums: 1e-16 times this is the accuracy kept (about 2e-13).
-constexpr double kMaxLoss = 2000.0;
-constexpr int kSingularOrder = 30;
+// Loss allowed to the corner sums: 1e-16 times this is the accuracy kept (about 4e-13).
+constexpr double kMaxLoss = 4000.0;
+// Gauss orders ceil(kOrderExponent / ln rho): rho^(-2n) <= 1e-15.
+constexpr double kOrderExponent = 16.0;
+// Each graded interval is [r phi, phi]: with the pole at 0, rho = 3 and 15 points for r = 1/4.
+constexpr double kLevelRatio = 0.25;
+constexpr int kMaxLevels = 40;
 constexpr int kMaxMidpointNodes = 32;
 
 struct Corner {
@@ -88,6 +91,53 @@ void add_angle(const Corners& corners, int k, double phi, double weight, Sums& s
     sums.magnitude += weight * std::fabs(a.c) * m;
 }
 
+// Where each corner term alone is singular: R = 0 at phi = i delta,
+// cosh(delta) = 1 + ((x - y)^2 + u^2) / (2 x y) (acosh(1 + t) formed as log1p for small t).
+double corner_pole(const Corner& q) {
+    const double t = ((q.y - q.x) * (q.y - q.x) + q.u * q.u) / (2.0 * q.x * q.y);
+    return std::log1p(t + std::sqrt(t * (t + 2.0)));
+}
+
+// Gauss-Legendre on intervals [phi / 4, phi] towards phi = 0, each with the order that the
+// Bernstein ellipse through the nearest pole asks for (the cut's start i delta, and every
+// corner's own pole, where the cut's density has a kink). With a gap, down to twice delta, and
+// plain Gauss-Legendre on the rest. When the cross-sections touch or overlap, down to the
+// smallest nonzero corner pole; on the rest T is singular at phi = 0 itself and
+// phi = phi_K v^3 smooths it. Measured on 211 random pairs against the cubature: 4e-13 at
+// worst, 20-55 nodes.
+void graded_rule(const Corners& corners, int k, double gap_pole, Sums& sums) {
+    const bool singular_at_zero = gap_pole == 0.0;
+    std::array<double, 16> poles{};
+    double smallest = kPi;
+    for (int i = 0; i < corners.count; ++i) {
+        poles[i] = corner_pole(corners.list[i]);
+        if (poles[i] > 0.0) smallest = std::min(smallest, poles[i]);
+    }
+    const auto order_for = [&](double lo, double hi) {
+        double rho = bernstein_rho(0.5 * (lo + hi), 0.5 * (hi - lo), {0.0, gap_pole});
+        for (int i = 0; i < corners.count; ++i)
+            if (poles[i] > 0.0) rho = std::min(rho, bernstein_rho(0.5 * (lo + hi), 0.5 * (hi - lo), {0.0, poles[i]}));
+        return std::clamp(gauss_points_for(rho, kOrderExponent), 4, kMaxGaussOrder);
+    };
+    const double floor = singular_at_zero ? smallest : 2.0 * gap_pole;
+    double hi = kPi;
+    for (int level = 0; level < kMaxLevels && hi > floor; ++level) {
+        const double lo = kLevelRatio * hi;
+        const GaussRule& g = gauss_rule(order_for(lo, hi));
+        for (int j = 0; j < g.n; ++j) add_angle(corners, k, lo + (hi - lo) * g.x[j], (hi - lo) * g.w[j], sums);
+        hi = lo;
+    }
+    const GaussRule& g = gauss_rule(singular_at_zero ? kMaxGaussOrder : order_for(0.0, hi));
+    for (int j = 0; j < g.n; ++j) {
+        if (singular_at_zero) {
+            const double v = g.x[j];
+            add_angle(corners, k, hi * v * v * v, 3.0 * hi * v * v * g.w[j], sums);
+        } else {
+            add_angle(corners, k, hi * g.x[j], hi * g.w[j], sums);
+        }
+    }
+}
+
 }  // namespace
 
 std::optional<double> thick_pair_angle_integral(const CoilSection& w1, const CoilSection& w2, double distance,
@@ -118,15 +168,7 @@ std::optional<double> thick_pair_angle_integral(const CoilSection& w1, const Coi
         const int n = std::max(midpoint_nodes, 8);
         for (int j = 0; j < n; ++j) add_angle(corners, k, kPi * (j + 0.5) / n, kPi / n, sums);
     } else {
-        using Rule = boost::math::quadrature::gauss<double, kSingularOrder>;
-        const auto& x = Rule::abscissa();
-        const auto& w = Rule::weights();
-        for (std::size_t j = 0; j < x.size(); ++j) {
-            for (const double side : {-1.0, 1.0}) {
-                const double v = 0.5 * (1.0 + side * x[j]);  // node on [0, 1]
-                add_angle(corners, k, kPi * v * v * v, 0.5 * w[j] * 3.0 * kPi * v * v, sums);
-            }
-        }
+        graded_rule(corners, k, delta, sums);
     }
     if (!(sums.magnitude <= kMaxLoss * std::fabs(sums.value))) return std::nullopt;
     return kMu0 * sums.value / ((b1 - a1) * (b2 - a2) * h1 * h2);
