@@ -21,77 +21,86 @@
 
 namespace coilwright::internal {
 
-AngleValues AngleValues::of(double phi) {
-    const double half = std::sin(0.5 * phi);
-    return {std::cos(phi), std::sin(phi), 2.0 * half * half};
+template <class Real>
+AngleValues<Real> AngleValues<Real>::of(Real phi) {
+    const Real half = std::sin(phi / 2);
+    return {std::cos(phi), std::sin(phi), 2 * half * half};
 }
 
 namespace {
 
 // z - atan(z) without cancellation for small z (alternating series, |z| <= 0.25: 25 terms at
 // most for full precision).
-double z_minus_atan(double z) {
+template <class Real>
+Real z_minus_atan(Real z) {
     if (std::fabs(z) > 0.25) return z - std::atan(z);
-    const double z2 = z * z;
-    double power = z * z2, sum = 0.0;
-    for (int k = 1; k < 30; ++k) {
-        const double term = power / (2 * k + 1);
+    const Real z2 = z * z;
+    Real power = z * z2, sum = 0;
+    for (int k = 1; k < 40; ++k) {
+        const Real term = power / (2 * k + 1);
         sum += (k % 2 != 0) ? term : -term;
-        if (std::fabs(term) <= 1e-17 * std::fabs(sum)) break;
+        if (std::fabs(term) <= Real(1e-21) * std::fabs(sum)) break;
         power *= z2;
     }
     return sum;
 }
 
 // ln(v + R) for R = sqrt(v^2 + w2), w2 = R^2 - v^2 >= 0.
-double log_sum(double v, double R, double w2) { return v >= 0.0 ? std::log(v + R) : std::log(w2 / (R - v)); }
+template <class Real>
+Real log_sum(Real v, Real R, Real w2) { return v >= 0 ? std::log(v + R) : std::log(w2 / (R - v)); }
 
 }  // namespace
 
-double rectangular_primitive(const AngleValues& a, double x, double y, double u, int k) {
-    const double c = a.c, s = a.s;
-    const double rho2 = (x - y) * (x - y) + 2.0 * x * y * a.one_minus_c;
-    const double R2 = rho2 + u * u, R = std::sqrt(R2), rho = std::sqrt(rho2);
-    const double eta = (y - x) + x * a.one_minus_c, xi = (x - y) + y * a.one_minus_c;
-    const double sx = s * x, sy = s * y;
-    const double Ly = log_sum(eta, R, sx * sx + u * u), Lx = log_sum(xi, R, sy * sy + u * u);
-    double A = 0.0, Px = 0.0, Py = 0.0, B = 0.0;
+template <class Real>
+Real rectangular_primitive(const AngleValues<Real>& a, Real x, Real y, Real u, int k) {
+    const Real c = a.c, s = a.s;
+    const Real rho2 = (x - y) * (x - y) + 2.0 * x * y * a.one_minus_c;
+    const Real R2 = rho2 + u * u, R = std::sqrt(R2), rho = std::sqrt(rho2);
+    const Real eta = (y - x) + x * a.one_minus_c, xi = (x - y) + y * a.one_minus_c;
+    const Real sx = s * x, sy = s * y;
+    const Real Ly = log_sum(eta, R, sx * sx + u * u), Lx = log_sum(xi, R, sy * sy + u * u);
+    Real A = 0, Px = 0, Py = 0, B = 0;
     if (u != 0.0) {
-        const double au = std::fabs(u);
+        const Real au = std::fabs(u);
         A = std::copysign(std::log((au + R) / rho), u);
         Px = std::atan(u * eta / (sx * R));
         Py = std::atan(u * xi / (sy * R));
-        const double N = sx * sy + c * u * u;
-        const double side = c < 0.0 ? -1.0 : 1.0;  // which of Phi_x + Phi_y (mod pi) stays small
-        const double z = u * s * R / N;
+        const Real N = sx * sy + c * u * u;
+        const Real side = c < 0.0 ? -1.0 : 1.0;  // which of Phi_x + Phi_y (mod pi) stays small
+        const Real z = u * s * R / N;
         if (side * N > 0.0 && std::fabs(z) < 0.5)
             B = s * s * s * R * (c * x * y - u * u) / N + u * z_minus_atan(z);
         else
             B = c * s * R - u * std::atan2(side * u * s * R, side * N);
     }
-    const double x3 = x * x * x, y3 = y * y * y;
-    const double cubes = x3 * eta + y3 * xi;       // x^3 eta + y^3 xi
-    const double quartic_angles = x * x3 * Px + y * y3 * Py;
-    const double s3 = s * s * s;
+    const Real x3 = x * x * x, y3 = y * y * y;
+    const Real cubes = x3 * eta + y3 * xi;       // x^3 eta + y^3 xi
+    const Real quartic_angles = x * x3 * Px + y * y3 * Py;
+    const Real s3 = s * s * s;
     if (k == 2) {
-        const double uA_R = u * A - R;
-        const double U2R3 = R2 * R2 * R / 20.0 + rho2 * R2 * R / 8.0 + 3.0 * rho2 * rho2 / 8.0 * uA_R;
-        const double U2R = R2 * R / 6.0 + 0.5 * rho2 * uA_R;
-        const double U2Ly = 0.5 * (u * u - sx * sx) * Ly + eta * u * A - 0.5 * eta * R - sx * u * Px;
-        const double U2Lx = 0.5 * (u * u - sy * sy) * Lx + xi * u * A - 0.5 * xi * R - sy * u * Py;
-        const double rest = -(c / 3.0) * (-0.25 * u * (x * y * (u * R - rho2 * A) - cubes * A + s * quartic_angles) +
-                                           0.2 * (2.0 * x * y * (R2 * R / 3.0 - rho2 * R) - cubes * R -
+        const Real uA_R = u * A - R;
+        const Real U2R3 = R2 * R2 * R / 20.0 + rho2 * R2 * R / 8.0 + 3.0 * rho2 * rho2 / 8.0 * uA_R;
+        const Real U2R = R2 * R / 6.0 + 0.5 * rho2 * uA_R;
+        const Real U2Ly = 0.5 * (u * u - sx * sx) * Ly + eta * u * A - 0.5 * eta * R - sx * u * Px;
+        const Real U2Lx = 0.5 * (u * u - sy * sy) * Lx + xi * u * A - 0.5 * xi * R - sy * u * Py;
+        const Real rest = -(c / 3.0) * (-0.25 * u * (x * y * (u * R - rho2 * A) - cubes * A + s * quartic_angles) +
+                                           (1 / Real(5)) * (2.0 * x * y * (R2 * R / 3.0 - rho2 * R) - cubes * R -
                                                   s * s * (x * x3 * x * Ly + y * y3 * y * Lx)));
-        return U2R3 / 3.0 + (2.0 / 3.0) * c * x * y * U2R + (c / 3.0) * (x3 * U2Ly + y3 * U2Lx) +
+        return U2R3 / 3.0 + (Real(2) / 3) * c * x * y * U2R + (c / 3.0) * (x3 * U2Ly + y3 * U2Lx) +
                c * (u * u) * (u * u) / (60.0 * s3) * B + rest;
     }
     {  // k == 1
-        const double U1R3 = u * R2 * R / 4.0 + 3.0 * rho2 / 8.0 * (u * R + rho2 * A);
-        const double U1R = 0.5 * (u * R + rho2 * A);
-        const double U1Ly = u * Ly + eta * A - sx * Px, U1Lx = u * Lx + xi * A - sy * Py;
-        return U1R3 / 3.0 + (2.0 / 3.0) * c * x * y * U1R + (c / 3.0) * (x3 * U1Ly + y3 * U1Lx) +
+        const Real U1R3 = u * R2 * R / 4.0 + 3.0 * rho2 / 8.0 * (u * R + rho2 * A);
+        const Real U1R = 0.5 * (u * R + rho2 * A);
+        const Real U1Ly = u * Ly + eta * A - sx * Px, U1Lx = u * Lx + xi * A - sy * Py;
+        return U1R3 / 3.0 + (Real(2) / 3) * c * x * y * U1R + (c / 3.0) * (x3 * U1Ly + y3 * U1Lx) +
                c * u * u * u / (12.0 * s3) * B + (c / 12.0) * (x * y * (u * R - rho2 * A) - cubes * A + s * quartic_angles);
     }
 }
+
+template struct AngleValues<double>;
+template struct AngleValues<long double>;
+template double rectangular_primitive(const AngleValues<double>&, double, double, double, int);
+template long double rectangular_primitive(const AngleValues<long double>&, long double, long double, long double, int);
 
 }  // namespace coilwright::internal

@@ -16,10 +16,12 @@
 
 namespace coilwright::internal {
 
-// The angle's trigonometric values, 1 - cos formed without cancellation.
+// The angle's trigonometric values, 1 - cos formed without cancellation. Real is double, or
+// long double where the corner sums cancel more digits than double can spare.
+template <class Real>
 struct AngleValues {
-    double c, s, one_minus_c;
-    static AngleValues of(double phi);
+    Real c, s, one_minus_c;
+    static AngleValues of(Real phi);
 };
 
 // P_k(x, y, u) with d/dx d/dy (d/du)^k P_k = cos(phi) x y / R: the primitive over both radii
@@ -27,6 +29,7 @@ struct AngleValues {
 // length, k = 1 for its slope), up to terms that the corner sums cancel: terms independent of
 // x or of y, and polynomials of degree < k in u. Even in u for k = 2, odd for k = 1.
 // x, y > 0; phi in (0, pi).
-double rectangular_primitive(const AngleValues& a, double x, double y, double u, int k);
+template <class Real>
+Real rectangular_primitive(const AngleValues<Real>& a, Real x, Real y, Real u, int k);
 
 }  // namespace coilwright::internal
