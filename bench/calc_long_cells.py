@@ -1,6 +1,7 @@
 #!/usr/bin/python3
 """Seconds that single heavy cells take in a real (headless) LibreOffice Calc: the cells that once
-froze it for 10-17 s (tests/e2e/test_long_cells.py checks that they come back at all), and a
+froze it for 10-17 s (tests/e2e/test_long_cells.py checks that they come back at all, and that
+the thick-coil inductance and force cells, now closed forms, come back with values), and a
 native formula of Calc's over as many elements for scale. Each case is typed into a fresh
 document; the time is from typing it to reading its result, then the median of hard
 recalculations. No cell may keep Calc for more than about 2 s (addin/core/work_costs.hpp:

@@ -26,6 +26,8 @@
 #include <vector>
 
 #include "coilwright/field.hpp"
+#include "coilwright/constants.hpp"
+#include "coilwright/inductance.hpp"
 #include "coilwright/sets.hpp"
 
 namespace {
@@ -88,6 +90,19 @@ void per_point(const Points& p, Output& o, F field) {
     }
 }
 
+template <class F>
+void per_point_indexed(const Points& p, Output& o, F field) {
+    for (std::size_t i = 0; i < p.n; ++i) {
+        try {
+            const FieldRZ f = field(i);
+            o.bz[i] = f.bz;
+            o.br[i] = f.br;
+        } catch (const std::exception&) {
+            o.bz[i] = o.br[i] = 0.0;
+        }
+    }
+}
+
 // A thin solenoid as long as its diameter; a thick coil of 30 % radial build as long as its
 // radius (the points fall inside its winding, in its bore and around it); a three-row table.
 const SolenoidSpec kSolenoid{kRadius, 2 * kRadius, 100, 1.5};
@@ -102,6 +117,20 @@ void solenoid_offaxis(const Points& p, Output& o) {
 
 void thick_offaxis(const Points& p, Output& o) {
     per_point(p, o, [](double z, double r) { return thick_coil_field(kThick, z, r); });
+}
+
+// Points within a tenth of the winding's radial build of one of its four corners (cycling
+// through them), at distances spread evenly in logarithm from 1e-6 to 0.1 of the build, in
+// every direction: inside and outside the winding.
+void thick_near_corner(const Points& p, Output& o) {
+    const double build = kThick.outer_radius - kThick.inner_radius, h = 0.5 * kThick.length;
+    per_point_indexed(p, o, [&](std::size_t i) {
+        const double corner_r = (i & 1) ? kThick.outer_radius : kThick.inner_radius;
+        const double corner_z = (i & 2) ? h : -h;
+        const double distance = build * std::pow(10.0, -6.0 + 5.0 * p.r[i] / (3.0 * kRadius));
+        const double angle = kPi * p.z[i] / (3.0 * kRadius);  // -pi..pi
+        return thick_coil_field(kThick, corner_z + distance * std::sin(angle), corner_r + distance * std::cos(angle));
+    });
 }
 
 void stack3_mixed(const Points& p, Output& o) {
@@ -132,9 +161,35 @@ void rig6(const CoilSet& rig, const Points& p, Output& o) {
 void rig6_circles(const Points& p, Output& o) { rig6(kRigCircles, p, o); }
 void rig6_squares(const Points& p, Output& o) { rig6(kRigSquares, p, o); }
 
+// Thick-coil inductance and force: one call per element of a fixed list of kCalls cases (the
+// figure printed is per call). The thick coil above (30 % build, as long as its radius), with
+// lengths spread by up to 2 %; against a second winding (0.8a..1.2a, 0.5a long) at the
+// benchmark's axial positions in -3a..3a: nested, overlapping, touching and apart.
+constexpr std::size_t kCalls = 400;
+const CoilSection kThickSection{kThick.inner_radius, kThick.outer_radius, kThick.length};
+const CoilSection kOtherSection{0.8 * kRadius, 1.2 * kRadius, 0.5 * kRadius};
+
+void coil_self(const Points& p, Output& o) {
+    for (std::size_t i = 0; i < kCalls; ++i) {
+        const CoilSection w{kThickSection.inner_radius, kThickSection.outer_radius,
+                            kThickSection.length * (1.0 + 0.02 * p.r[i] / (3.0 * kRadius))};
+        o.bz[i] = coil_self_inductance(w, 100.0);
+    }
+}
+
+void coil_mutual(const Points& p, Output& o) {
+    for (std::size_t i = 0; i < kCalls; ++i) o.bz[i] = coil_mutual_inductance(kThickSection, 100.0, kOtherSection, 50.0, p.z[i]);
+}
+
+void coil_force(const Points& p, Output& o) {
+    for (std::size_t i = 0; i < kCalls; ++i)
+        o.bz[i] = coil_axial_force(kThickSection, 100.0, 1.5, kOtherSection, 50.0, 2.0, p.z[i]);
+}
+
 struct Kernel {
     const char* name;
     void (*run)(const Points&, Output&);
+    std::size_t calls = 0;  // 0: one call per point; otherwise this many calls per pass
 };
 
 // One line per kernel.
@@ -148,7 +203,11 @@ const Kernel kKernels[] = {
     {"stack3_mixed", stack3_mixed},                // loop + thin solenoid + thick coil table
     {"rig6_circles", rig6_circles},                // coil set: three-axis rig of circles, Bx, By, Bz
     {"rig6_squares", rig6_squares},                // coil set: three-axis rig of squares, Bx, By, Bz
+    {"thick_near_corner", thick_near_corner},      // thick winding within 0.1 build of a corner
     {"boost_ellint_1_2", boost_ellint_1_2},        // reference: ellint_1 + ellint_2, scalar
+    {"coil_self", coil_self, kCalls},              // thick-coil self-inductance (COIL_L), ns per call
+    {"coil_mutual", coil_mutual, kCalls},          // two thick coils' mutual inductance (COIL_M), ns per call
+    {"coil_force", coil_force, kCalls},            // their axial force (COIL_FZ), ns per call
 };
 
 // splitmix64 (S. Vigna, 2015): a fixed, portable stream of pseudo-random numbers.
@@ -214,7 +273,7 @@ double time_kernel(const Kernel& k, const Points& p, Output& o, int repeat) {
         const double t0 = thread_seconds();
         k.run(p, o);
         const double t1 = thread_seconds();
-        ns_per_point.push_back((t1 - t0) * 1e9 / static_cast<double>(p.n));
+        ns_per_point.push_back((t1 - t0) * 1e9 / static_cast<double>(k.calls ? k.calls : p.n));
     }
     return median(ns_per_point);
 }
@@ -253,7 +312,7 @@ int main(int argc, char** argv) {
         else if (arg == "--write-field") field_file = value;
         else usage();
     }
-    if (n == 0 || repeat <= 0) usage();
+    if (n < kCalls || repeat <= 0) usage();
     for (const std::string& w : wanted)
         if (std::none_of(std::begin(kKernels), std::end(kKernels), [&](const Kernel& k) { return w == k.name; }))
             usage();

@@ -16,9 +16,11 @@ double field_point(const CoilTable& table) {
 }
 
 double inductance_matrix(const CoilTable& table) {
-    // A self term or a touching pair costs about a thick-coil inductance, a distant pair less.
+    // A self term costs about a thick-coil inductance; a pair as much, or up to several times
+    // more when the coils are far apart compared with their size (extended precision or the
+    // cubature): kThickPairInductance.
     const double n = static_cast<double>(table.size());
-    return kThickInductance * n + 0.2 * kThickInductance * n * (n - 1) / 2;
+    return kThickInductance * n + kThickPairInductance * n * (n - 1) / 2;
 }
 
 double set_point(const CoilSet& set) {

@@ -24,8 +24,15 @@ inline constexpr double kThickField = 100.0;
 inline constexpr double kRectPairField = 2.0;
 // A closed form with a few elementary functions (wire, winding, budget, filament inductance).
 inline constexpr double kClosedForm = 1.0;
-// Thick-coil self or mutual inductance or force (cubature over both cross-sections).
-inline constexpr double kThickInductance = 5e4;
+// Thick-coil self or mutual inductance or force: one angle integral of closed forms, 15-60 us
+// (bench/field-bench coil_self, coil_mutual, coil_force), up to 0.3 ms where extended
+// precision is needed (thin or distant windings); the cubature that still serves loops, sheets
+// and flat spirals, and the thinnest windings, costs 0.1-5 ms (the deadline ends calls that
+// meet many such).
+inline constexpr double kThickInductance = 1e4;
+// One pair of an inductance matrix: the rows of a table are often far apart compared with
+// their size (measured: 400 thick rows 5 cm apart took 8.6 s, about 0.1 ms per pair).
+inline constexpr double kThickPairInductance = 1e4;
 // A pair-spacing search along the axis, and the rectangle pair's.
 inline constexpr double kPairSpacingSearch = 500.0;
 inline constexpr double kRectPairSpacingSearch = 20.0;

@@ -19,6 +19,7 @@
 #include "coilwright/inductance/mutual.hpp"
 #include "coilwright/inductance/self.hpp"
 #include "inductance/section_integral.hpp"
+#include "inductance/thick_pair.hpp"
 
 namespace coilwright {
 
@@ -104,12 +105,24 @@ double coil_mutual_inductance_slope(const CoilSection& w1, const CoilSection& w2
 
 namespace {
 
+// Both windings with area and length: the angle integral of closed forms (thick_pair.cpp) when
+// its corner sums keep their digits.
+bool both_thick(const CoilSection& w1, const CoilSection& w2) {
+    return w1.inner_radius < w1.outer_radius && w1.length > 0.0 && w2.inner_radius < w2.outer_radius && w2.length > 0.0;
+}
+
 double mutual_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    if (both_thick(w1, w2)) {
+        if (const auto m = internal::thick_pair_angle_integral(w1, w2, distance, internal::PairQuantity::Mutual)) return *m;
+    }
     const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
     return internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
 }
 
 double slope_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    if (both_thick(w1, w2)) {
+        if (const auto m = internal::thick_pair_angle_integral(w1, w2, distance, internal::PairQuantity::Slope)) return *m;
+    }
     const double h1 = w1.length, h2 = w2.length;
     const double reach = 0.5 * (h1 + h2);  // the offsets span distance -+ reach
     const double radial_gap = std::fmax(0.0, std::fmax(w1.inner_radius, w2.inner_radius) - std::fmin(w1.outer_radius, w2.outer_radius));
