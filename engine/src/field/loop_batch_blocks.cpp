@@ -76,7 +76,10 @@ COILWRIGHT_LANE_INLINE std::size_t block(BatchCode code, const LoopSpec& loop, d
         const M ok = in_kernel_range<L>(z_n, r_n, omr);
         in_range[k] = ok;
         // Lanes outside the range compute the centre instead (and are redone one by one).
-        state[k] = State::start(L::select(ok, z_n, zero), L::select(ok, r_n, zero), L::select(ok, omr, one));
+        if (L::all(ok))
+            state[k] = State::start(z_n, r_n, omr);
+        else
+            state[k] = State::start(L::select(ok, z_n, zero), L::select(ok, r_n, zero), L::select(ok, omr, one));
     }
     // Each stage runs over all packs before the next, so that the processor overlaps the packs'
     // long chains of square roots, divisions and polynomials. Every point takes one Gauss step;

@@ -82,8 +82,8 @@ struct KernelState {
     using V = typename L::V;
     // Kept for finish(): z, 1 - r, 2 r (loop radii), beta^3 and D = alpha^2 (1 + kc).
     V z_n, one_minus_r, two_r, beta3, d;
-    // Bulirsch's qc, em, g, e; the two integrands' a and b, stored multiplied by t.
-    V qc, em, g, e, a0, b0, a1, b1, t;
+    // Bulirsch's qc, em, g (his e is qc g); the two integrands' a and b, stored multiplied by t.
+    V qc, em, g, a0, b0, a1, b1, t;
 
     // Only for points inside the kernel's range (in_kernel_range).
     COILWRIGHT_LANE_INLINE static KernelState start(V z, V r, V omr) {
@@ -102,7 +102,6 @@ struct KernelState {
         s.qc = kc;
         s.em = 1.0 + kc;
         s.g = L::splat(1.0);
-        s.e = kc;
         s.a0 = L::splat(1.0);
         s.b0 = L::splat(2.0);
         s.a1 = 1.0 + kc;
@@ -121,13 +120,12 @@ struct KernelState {
     // is qc'. The division by em is carried in t instead of done: a and b are stored times t.
     template <bool kEveryLane = false>
     COILWRIGHT_LANE_INLINE void step(typename L::M m) {
-        const V qc_next = 2.0 * L::sqrt(e);
+        const V qc_next = 2.0 * L::sqrt(qc * g);  // e = qc g, formed when needed
         const V two_em = em + em;
         const V a0_next = L::mul_add(a0, em, b0), b0_next = two_em * L::mul_add(a0, qc_next, b0);
         const V a1_next = L::mul_add(a1, em, b1), b1_next = two_em * L::mul_add(a1, qc_next, b1);
-        const V e_next = qc_next * em, t_next = t * em, em_next = em + qc_next;
+        const V t_next = t * em, em_next = em + qc_next;
         if constexpr (kEveryLane) {
-            e = e_next;
             qc = qc_next;
             a0 = a0_next;
             b0 = b0_next;
@@ -137,7 +135,6 @@ struct KernelState {
             g = em;
             em = em_next;
         } else {
-            e = L::select(m, e_next, e);
             qc = L::select(m, qc_next, qc);
             a0 = L::select(m, a0_next, a0);
             b0 = L::select(m, b0_next, b0);
