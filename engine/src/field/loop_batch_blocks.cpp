@@ -83,7 +83,7 @@ COILWRIGHT_LANE_INLINE std::size_t block(BatchCode code, const LoopSpec& loop, d
     }
     // Each stage runs over all packs before the next, so that the processor overlaps the packs'
     // long chains of square roots, divisions and polynomials. Every point takes one Gauss step;
-    // after it few lanes (2 % of a coil's working volume) are still active, and the packs that
+    // after it few lanes (1 % of a coil's working volume) are still active, and the packs that
     // have none skip the further steps.
     for (std::size_t k = 0; k < kPacks; ++k) state[k].template step<true>(M{});
     M active[kPacks];

@@ -43,12 +43,12 @@ inline constexpr int kMaxGaussSteps = kCelMaxSteps;
 //   G(u) = sum c_k^2 / (k + 1) u^k = 2F1(1/2, 1/2; 2; u),   c_k = binom(2k, k) / 4^k
 // (Gauss's hypergeometric series, DLMF 15.2.1). Our own derivation: the power series that the
 // step's recurrence leaves invariant, solved order by order in exact fractions (they match
-// these closed forms term by term). At the gap 0.3, u <= (0.3 / 1.7)^2 = 0.031 and the first
-// terms left out (k = 11: 0.054 u^11 in F) are below 2e-18. After the one step 98 % of the
-// points of a coil's working volume have converged: about three of the four Gauss steps (and
-// their square roots) that a gap of 1e-9 would take are saved.
-inline constexpr double kTailGap = 0.3;
-inline constexpr int kTailTerms = 11;  // k = 0 ... 10; the coefficients are exact in binary
+// these closed forms term by term). At the gap 0.4, u <= (0.4 / 1.6)^2 = 1/16 and the terms
+// left out (from k = 14: 0.043 u^14 in F) add up to less than 1e-18. After the one step 99 %
+// of the points of a coil's working volume have converged: about three of the four Gauss steps
+// (and their square roots) that a gap of 1e-9 would take are saved.
+inline constexpr double kTailGap = 0.4;
+inline constexpr int kTailTerms = 14;  // k = 0 ... 13; the coefficients are exact in binary
 inline constexpr double kTailF[kTailTerms] = {1.0,
                                               3.0 / 8,
                                               15.0 / 64,
@@ -59,7 +59,10 @@ inline constexpr double kTailF[kTailTerms] = {1.0,
                                               2760615.0 / 33554432,
                                               78217425.0 / 1073741824,
                                               561427295.0 / 8589934592,
-                                              4072899831.0 / 68719476736};
+                                              4072899831.0 / 68719476736,
+                                              59612442981.0 / 1099511627776,
+                                              878901402925.0 / 17592186044416,
+                                              6519323593125.0 / 140737488355328};
 inline constexpr double kTailG[kTailTerms] = {1.0,
                                               1.0 / 8,
                                               3.0 / 64,
@@ -70,7 +73,10 @@ inline constexpr double kTailG[kTailTerms] = {1.0,
                                               184041.0 / 33554432,
                                               4601025.0 / 1073741824,
                                               29548805.0 / 8589934592,
-                                              193947611.0 / 68719476736};
+                                              193947611.0 / 68719476736,
+                                              2591845347.0 / 1099511627776,
+                                              35156056117.0 / 17592186044416,
+                                              241456429375.0 / 140737488355328};
 
 // The kernel's state for one point or one pack of points, in three stages: start (geometry and
 // the first Gauss step, done by hand), step (one more Gauss step, only in lanes still active)
