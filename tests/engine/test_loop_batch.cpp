@@ -16,6 +16,7 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "field/loop_batch_code.hpp"
+#include "field/loop_kernel.hpp"
 
 using namespace coilwright;
 using internal::BatchCode;
@@ -219,3 +220,16 @@ TEST(LoopBatch, PlainArrayLanesGiveTheBitsOfVectorLanes) {
         }
 }
 #endif
+
+TEST(LoopKernel, TailCoefficientsAreTheHypergeometricSeries) {
+    // F(u) = 2F1(1/2, 3/2; 2; u) and G(u) = 2F1(1/2, 1/2; 2; u) (DLMF 15.2.1): the ratio of terms
+    // k+1 and k is (a + k)(b + k) / ((c + k)(k + 1)). The kernel's constants are exact fractions;
+    // these products round, hence the tolerance of a few units in the last place.
+    double f = 1.0, g = 1.0;
+    for (int k = 0; k < internal::kTailTerms; ++k) {
+        EXPECT_NEAR(internal::kTailF[k], f, 1e-15 * f) << k;
+        EXPECT_NEAR(internal::kTailG[k], g, 1e-15 * g) << k;
+        f *= (0.5 + k) * (1.5 + k) / ((2.0 + k) * (k + 1.0));
+        g *= (0.5 + k) * (0.5 + k) / ((2.0 + k) * (k + 1.0));
+    }
+}
