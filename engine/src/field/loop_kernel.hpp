@@ -11,7 +11,8 @@
 // cel(kc, kc^2, ., .) Bulirsch's p equals em at every step, so the division by p in each step is
 // a division by em, which is carried along in t instead of done. At the end
 //   Bz = (U + (1 - r) W) / (2 beta^3 D t em^2),   Br = z W / (2 beta^3 D t em^2),
-//   U = (b0 + a0 em) D,   W = 2 r (b1 + a1 em):
+//   U = (b0 + a0 em) D,   W = 2 r (b1 + a1 em)
+// (b + a em becoming b F(u) + a em G(u) once the steps left are summed, see kTailGap):
 // two divisions per point (kc and the last line) and one square root per Gauss step. Every
 // quantity is a sum or product of positive numbers except U + (1 - r) W, which cancels only
 // where Bz itself changes sign. Method: M. Ortner, P. Leitner, F. Slanovc, Magnetism 3(1) (2023)
@@ -82,7 +83,7 @@ inline constexpr double kTailG[kTailTerms] = {1.0,
 // the first Gauss step, done by hand), step (one more Gauss step, only in lanes still active)
 // and finish (the field). Single points and packs run the same stages, so they agree bitwise:
 // start, step<true> once (every point takes it), step while active, finish.
-// Products followed by a sum go through L::mul_add: fused only in FusedPackLanes.
+// Products followed by a sum go through L::mul_add: fused only in the Fused lanes (AVX2+FMA copy).
 template <class L>
 struct KernelState {
     using V = typename L::V;
