@@ -1,7 +1,11 @@
 // The batch loop field gives exactly what loop_field gives, point by point, in both copies of
-// its code (baseline x86-64 and AVX2), and NaN exactly where loop_field throws.
+// its code (baseline x86-64, and AVX2 with FMA against loop_field computed the same way), and
+// NaN exactly where loop_field throws; the two copies agree to a few units in the last place;
+// and the batch compiled on plain arrays instead of compiler vector types (the portable
+// layer's fallback, numerics/lanes.hpp) gives the same bits as the engine's.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdint>
 #include <cstring>
@@ -12,6 +16,7 @@
 #include "coilwright/errors.hpp"
 #include "coilwright/field.hpp"
 #include "field/loop_batch_code.hpp"
+#include "field/loop_kernel.hpp"
 
 using namespace coilwright;
 using internal::BatchCode;
@@ -67,11 +72,11 @@ Points hard_and_random_points(double a) {
 
 std::vector<BatchCode> codes() {
     std::vector<BatchCode> out{BatchCode::Baseline};
-    if (internal::best_batch_code() == BatchCode::Avx2) out.push_back(BatchCode::Avx2);
+    if (internal::best_batch_code() == BatchCode::Avx2Fma) out.push_back(BatchCode::Avx2Fma);
     return out;
 }
 
-const char* name(BatchCode c) { return c == BatchCode::Avx2 ? "AVX2" : "baseline"; }
+const char* name(BatchCode c) { return c == BatchCode::Avx2Fma ? "AVX2+FMA" : "baseline"; }
 
 }  // namespace
 
@@ -87,7 +92,7 @@ TEST(LoopBatch, EqualsLoopFieldBitForBitOrIsNaNWhereItThrows) {
             std::size_t throws = 0;
             for (std::size_t i = 0; i < n; ++i) {
                 try {
-                    const FieldRZ f = loop_field(loop, p.z[i], p.r[i]);
+                    const FieldRZ f = internal::loop_field_with(code, loop, p.z[i], p.r[i]);
                     ASSERT_EQ(bits(bz[i]), bits(f.bz)) << name(code) << " z=" << p.z[i] << " r=" << p.r[i];
                     ASSERT_EQ(bits(br[i]), bits(f.br)) << name(code) << " z=" << p.z[i] << " r=" << p.r[i];
                 } catch (const DomainError&) {
@@ -107,11 +112,51 @@ TEST(LoopBatch, TheDefaultEntryPointsUseTheSameCode) {
     const std::size_t n = p.z.size();
     std::vector<double> bz(n), br(n), bz_ref(n), br_ref(n);
     loop_field_batch(loop, p.z.data(), p.r.data(), n, bz.data(), br.data());
-    internal::loop_field_batch_using(BatchCode::Baseline, loop, 0.0, p.z.data(), p.r.data(), n, bz_ref.data(),
-                                   br_ref.data(), false);
+    internal::loop_field_batch_using(internal::best_batch_code(), loop, 0.0, p.z.data(), p.r.data(), n, bz_ref.data(),
+                                     br_ref.data(), false);
     for (std::size_t i = 0; i < n; ++i) {
         EXPECT_EQ(bits(bz[i]), bits(bz_ref[i]));
         EXPECT_EQ(bits(br[i]), bits(br_ref[i]));
+        try {
+            const FieldRZ f = loop_field(loop, p.z[i], p.r[i]);  // a cell and an array formula agree
+            EXPECT_EQ(bits(bz[i]), bits(f.bz));
+            EXPECT_EQ(bits(br[i]), bits(f.br));
+        } catch (const DomainError&) {
+            EXPECT_TRUE(std::isnan(bz[i]));
+        }
+    }
+}
+
+TEST(LoopBatch, TheFusedCopyAgreesWithTheBaselineToRounding) {
+    if (internal::best_batch_code() != BatchCode::Avx2Fma) GTEST_SKIP() << "the processor has no AVX2 and FMA";
+    // Relative to |B| at the point: the fused products change roundings only. Each copy is held
+    // to 5e-15 of mpmath in test_loop_reference.cpp; apart they are at most 2.1e-15 of |B|, far
+    // from the loop (1e4 to 1e8 radii; at two such points mpmath's closed form at 50 digits
+    // puts the fused copy the nearer, both within 1e-15 of it).
+    for (const LoopSpec loop : {LoopSpec{0.25, 40, 1.5}, LoopSpec{3e-5, 7, 0.2}}) {
+        const Points p = hard_and_random_points(loop.radius);
+        const std::size_t n = p.z.size();
+        std::vector<double> bz(n), br(n), bz_fused(n), br_fused(n);
+        internal::loop_field_batch_using(BatchCode::Baseline, loop, 0.0, p.z.data(), p.r.data(), n, bz.data(),
+                                         br.data(), false);
+        internal::loop_field_batch_using(BatchCode::Avx2Fma, loop, 0.0, p.z.data(), p.r.data(), n, bz_fused.data(),
+                                         br_fused.data(), false);
+        double worst = 0.0;
+        std::size_t worst_at = 0;
+        for (std::size_t i = 0; i < n; ++i) {
+            if (std::isnan(bz[i])) {
+                EXPECT_TRUE(std::isnan(bz_fused[i]) && std::isnan(br_fused[i]));
+                continue;
+            }
+            const double size = std::hypot(bz[i], br[i]);
+            const double gap = std::max(std::fabs(bz_fused[i] - bz[i]), std::fabs(br_fused[i] - br[i])) / size;
+            if (gap > worst) {
+                worst = gap;
+                worst_at = i;
+            }
+        }
+        EXPECT_LE(worst, 4e-15) << loop.radius << " at z/a = " << p.z[worst_at] / loop.radius
+                                << ", r/a = " << p.r[worst_at] / loop.radius;
     }
 }
 
@@ -126,8 +171,8 @@ TEST(LoopBatch, AddingLoopsIsTheSumOfMovedLoops) {
             internal::loop_field_batch_using(code, loop, centre, p.z.data(), p.r.data(), n, bz.data(), br.data(), true);
         for (std::size_t i = 0; i < n; ++i) {
             try {
-                const FieldRZ lower = loop_field(loop, p.z[i] + 0.15, p.r[i]);
-                const FieldRZ upper = loop_field(loop, p.z[i] - 0.15, p.r[i]);
+                const FieldRZ lower = internal::loop_field_with(code, loop, p.z[i] + 0.15, p.r[i]);
+                const FieldRZ upper = internal::loop_field_with(code, loop, p.z[i] - 0.15, p.r[i]);
                 ASSERT_EQ(bits(bz[i]), bits(0.0 + lower.bz + upper.bz)) << name(code) << " z=" << p.z[i];
                 ASSERT_EQ(bits(br[i]), bits(0.0 + lower.br + upper.br)) << name(code) << " z=" << p.z[i];
             } catch (const DomainError&) {
@@ -145,4 +190,46 @@ TEST(LoopBatch, ABadLoopIsAnErrorAndNothingIsWritten) {
     EXPECT_THROW(add_loop_field_batch({1.0, 1, 1}, std::nan(""), z, r, 1, bz, br), DomainError);
     EXPECT_EQ(bz[0], 7.0);
     EXPECT_EQ(loop_field_batch({1.0, 1, 1}, z, r, 0, bz, br), 0u);  // no points: nothing to do
+}
+
+#ifdef COILWRIGHT_TEST_SCALAR_LANES_TWIN
+// scalar_lanes: loop_batch_blocks.cpp compiled a second time with COILWRIGHT_SCALAR_LANES
+// (tests/engine/CMakeLists.txt).
+TEST(LoopBatch, PlainArrayLanesGiveTheBitsOfVectorLanes) {
+    // The hard points and a million points around the loop, in both copies of the code, storing
+    // and adding: the fallback for compilers without vector types must not change a bit.
+    const LoopSpec loop{0.2, 30, 1.25};
+    Points p = hard_and_random_points(loop.radius);
+    std::mt19937_64 rng(11);
+    std::uniform_real_distribution<double> u(0.0, 1.0);
+    for (int i = 0; i < 1000000; ++i) p.add((6 * u(rng) - 3) * loop.radius, 3 * u(rng) * loop.radius);
+    const std::size_t n = p.z.size();
+    for (BatchCode code : codes())
+        for (bool add : {false, true}) {
+            std::vector<double> bz(n, 0.5), br(n, -0.5), bz_plain(n, 0.5), br_plain(n, -0.5);
+            const std::size_t failed = internal::vector_lanes::loop_field_batch_using(
+                code, loop, 0.01, p.z.data(), p.r.data(), n, bz.data(), br.data(), add);
+            const std::size_t failed_plain = internal::scalar_lanes::loop_field_batch_using(
+                code, loop, 0.01, p.z.data(), p.r.data(), n, bz_plain.data(), br_plain.data(), add);
+            EXPECT_EQ(failed, failed_plain);
+            EXPECT_GE(failed, 6u);  // the non-finite and negative points
+            std::size_t differ = 0;
+            for (std::size_t i = 0; i < n; ++i)
+                differ += bits(bz[i]) != bits(bz_plain[i]) || bits(br[i]) != bits(br_plain[i]);
+            EXPECT_EQ(differ, 0u) << name(code) << (add ? " adding" : " storing");
+        }
+}
+#endif
+
+TEST(LoopKernel, TailCoefficientsAreTheHypergeometricSeries) {
+    // F(u) = 2F1(1/2, 3/2; 2; u) and G(u) = 2F1(1/2, 1/2; 2; u) (DLMF 15.2.1): the ratio of terms
+    // k+1 and k is (a + k)(b + k) / ((c + k)(k + 1)). The kernel's constants are exact fractions;
+    // these products round, hence the tolerance of a few units in the last place.
+    double f = 1.0, g = 1.0;
+    for (int k = 0; k < internal::kTailTerms; ++k) {
+        EXPECT_NEAR(internal::kTailF[k], f, 1e-15 * f) << k;
+        EXPECT_NEAR(internal::kTailG[k], g, 1e-15 * g) << k;
+        f *= (0.5 + k) * (1.5 + k) / ((2.0 + k) * (k + 1.0));
+        g *= (0.5 + k) * (0.5 + k) / ((2.0 + k) * (k + 1.0));
+    }
 }

@@ -22,7 +22,9 @@
 #include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
+#include "field/loop_batch_code.hpp"
 #include "field/loop_kernel.hpp"
+#include "numerics/cpu_features.hpp"
 
 namespace coilwright {
 
@@ -54,9 +56,35 @@ FieldRZ loop_field_normalized(double z_n, double r_n, double one_minus_r) {
     return {pref * (2.0 * P + one_minus_r * radial), pref * z_n * radial};
 }
 
-}  // namespace internal
+namespace {
 
-FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
+// The fast kernel on one point inside its range, on the lanes L.
+template <class L>
+COILWRIGHT_LANE_INLINE FieldRZ kernel_point(double scale, double z_n, double r_n, double one_minus_r) {
+    using State = internal::KernelState<L>;
+    State s[1] = {State::start(z_n, r_n, one_minus_r)};
+    s[0].template step<true>(true);
+    for (StepBudget budget(kMaxGaussSteps, "the elliptic integral (Bulirsch's cel)"); s[0].active(); budget.step())
+        s[0].template step<true>(true);
+    double bz[1], br[1];
+    State::finish(s, scale, bz, br);
+    return {bz[0], br[0]};
+}
+
+FieldRZ kernel_point_baseline(double scale, double z_n, double r_n, double one_minus_r) {
+    return kernel_point<ScalarLanes>(scale, z_n, r_n, one_minus_r);
+}
+
+#ifdef COILWRIGHT_HAVE_AVX2_FMA_CODE
+// Each lane of the batch's AVX2 and FMA copy, bit for bit.
+[[gnu::target("avx2,fma")]] FieldRZ kernel_point_fused(double scale, double z_n, double r_n, double one_minus_r) {
+    return kernel_point<FusedScalarLanes>(scale, z_n, r_n, one_minus_r);
+}
+#endif
+
+}  // namespace
+
+FieldRZ loop_field_with(BatchCode code, const LoopSpec& loop, double z, double r) {
     validate(loop);
     check::finite(z, "z");
     check::non_negative(r, "r");
@@ -73,18 +101,25 @@ FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
     if (!std::isfinite(z_n) || !std::isfinite(r_n))
         raise_domain_error("the point is more than 1e308 radii from the loop, beyond double precision");
     FieldRZ f;
-    if (internal::in_kernel_range<internal::ScalarLanes>(z_n, r_n, one_minus_r)) {
-        using State = internal::KernelState<internal::ScalarLanes>;
-        State s = State::start(z_n, r_n, one_minus_r);
-        for (StepBudget budget(kMaxGaussSteps, "the elliptic integral (Bulirsch's cel)"); s.active(); budget.step())
-            s.step<true>(true);
-        s.finish(scale, f.bz, f.br);
+    if (internal::in_kernel_range<ScalarLanes>(z_n, r_n, one_minus_r)) {
+#ifdef COILWRIGHT_HAVE_AVX2_FMA_CODE
+        if (code == BatchCode::Avx2Fma && processor_has_avx2_fma())
+            f = kernel_point_fused(scale, z_n, r_n, one_minus_r);
+        else
+#endif
+            f = kernel_point_baseline(scale, z_n, r_n, one_minus_r);
     } else {
         f = scale * internal::loop_field_normalized(z / a, r / a, (a - r) / a);
     }
     check::finite_result(f.bz, "Bz");
     check::finite_result(f.br, "Br");
     return f;
+}
+
+}  // namespace internal
+
+FieldRZ loop_field(const LoopSpec& loop, double z, double r) {
+    return internal::loop_field_with(internal::best_batch_code(), loop, z, r);
 }
 
 }  // namespace coilwright

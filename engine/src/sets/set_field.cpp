@@ -21,10 +21,10 @@ using internal::to_global;
 
 namespace {
 
-constexpr int kLanes = 4;
-using Pack = double __attribute__((vector_size(kLanes * sizeof(double))));
-using PackMask = decltype(Pack{} < Pack{});
-using Lanes = internal::PackLanes<Pack, PackMask, kLanes>;
+constexpr int kLanes = internal::kPackWidth;
+using internal::Pack;
+using internal::PackMask;
+using Lanes = internal::PackLanes;
 
 // Adds the field of a thin rectangle at m local points (padded to whole packs) to the totals,
 // through the rectangle kernel in packs; points beyond its reach, and points of a tilted coil
