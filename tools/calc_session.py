@@ -26,6 +26,22 @@ def props(**kw):
     return tuple(out)
 
 
+def used_cells(doc):
+    """(sheet, cell) for every cell of each sheet's used area, row by row."""
+    for sheet in doc.Sheets:
+        cursor = sheet.createCursor()
+        cursor.gotoEndOfUsedArea(False)
+        end = cursor.getRangeAddress()
+        for row in range(end.EndRow + 1):
+            for col in range(end.EndColumn + 1):
+                yield sheet, sheet.getCellByPosition(col, row)
+
+
+def cell_name(cell):
+    """The cell's address within its sheet, e.g. B4."""
+    return cell.AbsoluteName.split(".")[-1].replace("$", "")
+
+
 class CalcSession:
     def __init__(self, oxt=None, keep_dir=False, timeout=60, directory=None):
         # directory: use (and keep) the profile and shared-extension cache already in it.

@@ -13,22 +13,13 @@ import uno
 ROOT = pathlib.Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT / "tools"))
 
-from calc_session import CalcSession, props  # noqa: E402
+from calc_session import CalcSession, cell_name, props, used_cells  # noqa: E402
 
 
 def error_cells(doc):
     """Addresses of formula cells that show an error after recalculation."""
-    bad = []
-    for sheet in doc.Sheets:
-        cursor = sheet.createCursor()
-        cursor.gotoEndOfUsedArea(False)
-        end = cursor.getRangeAddress()
-        for row in range(end.EndRow + 1):
-            for col in range(end.EndColumn + 1):
-                cell = sheet.getCellByPosition(col, row)
-                if cell.getError():
-                    bad.append(f"{sheet.Name}.{cell.AbsoluteName.split('.')[-1]}: Err:{cell.getError()}")
-    return bad
+    return [f"{sheet.Name}.{cell_name(cell)}: Err:{cell.getError()}"
+            for sheet, cell in used_cells(doc) if cell.getError()]
 
 
 def main():

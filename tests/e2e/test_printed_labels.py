@@ -21,7 +21,7 @@ import uno
 ROOT = pathlib.Path(__file__).resolve().parents[2]
 sys.path.insert(0, str(ROOT / "tools"))
 
-from calc_session import CalcSession, props  # noqa: E402
+from calc_session import CalcSession, cell_name, props, used_cells  # noqa: E402
 from e2e_support import OXT  # noqa: E402
 
 WORKBOOKS = sorted((ROOT / "sheets").glob("*.ods"))
@@ -34,19 +34,12 @@ def flat(text):
 
 def printed_cells(doc):
     """(sheet, cell name, displayed text, wrapped) of every non-empty cell."""
-    for sheet in doc.Sheets:
-        cursor = sheet.createCursor()
-        cursor.gotoEndOfUsedArea(False)
-        end = cursor.getRangeAddress()
-        for row in range(end.EndRow + 1):
-            for col in range(end.EndColumn + 1):
-                cell = sheet.getCellByPosition(col, row)
-                if cell.getType() == EMPTY:
-                    continue
-                shown = flat(cell.getString())
-                if shown:
-                    yield sheet.Name, cell.AbsoluteName.split(".")[-1], shown, bool(cell.IsTextWrapped)
-
+    for sheet, cell in used_cells(doc):
+        if cell.getType() == EMPTY:
+            continue
+        shown = flat(cell.getString())
+        if shown:
+            yield sheet.Name, cell_name(cell), shown, bool(cell.IsTextWrapped)
 
 def missing_labels(cells, pdf_text):
     """The cells whose displayed text the printed text lacks as whole words."""
