@@ -19,8 +19,7 @@ int whole_pairs(double v) {
 }
 
 // A function of single numbers whose result is a coil table: make(const Fn::Args&).
-template <class Fn, class F>
-Implementation design_table(F make, double cost) {
+template <class Fn, class F> Implementation design_table(F make, double cost) {
     return prepared<Fn>([make, cost](std::span<const Arg* const>) {
         Prepared p;
         p.cost = cost;
@@ -29,8 +28,7 @@ Implementation design_table(F make, double cost) {
     });
 }
 
-template <class A>
-LayerWinding winding_of(const A& a) {
+template <class A> LayerWinding winding_of(const A& a) {
     return {a.innerRadius, a.insulatedDiameter, a.turnsPerLayer, a.layers, a.current, a.packing};
 }
 

@@ -34,8 +34,9 @@ struct Case {
 };
 
 CoilTable make(const Case& c, double radius, double at) {
-    return c.gradient ? gradient_coils(radius, c.pairs, at, c.constraint)
-                      : uniform_coils(radius, c.pairs, at, c.constraint, c.centre ? CentreLoop::Loop : CentreLoop::None);
+    return c.gradient
+               ? gradient_coils(radius, c.pairs, at, c.constraint)
+               : uniform_coils(radius, c.pairs, at, c.constraint, c.centre ? CentreLoop::Loop : CentreLoop::None);
 }
 
 std::vector<Case> offered() {

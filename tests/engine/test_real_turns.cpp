@@ -21,8 +21,9 @@ TEST(RealTurns, MatchesMpmathLoopSums) {
     const auto rows = reference::read_reference("real_turns.csv");
     ASSERT_EQ(rows.size(), 21u);
     for (const auto& row : rows) {
-        const LayerWinding w{row.num(0), row.num(1), row.num(2), row.num(3), 1.5,
-                             row.cells[4] == "hexagonal" ? Packing::Hexagonal : Packing::Square};
+        const LayerWinding w{row.num(0), row.num(1),
+                             row.num(2), row.num(3),
+                             1.5,        row.cells[4] == "hexagonal" ? Packing::Hexagonal : Packing::Square};
         const FieldRZ b = real_turns_field(w, row.num(5), row.num(6));
         const double scale = std::hypot(row.num(7), row.num(8));
         EXPECT_LE(std::fabs(b.bz - row.num(7)) / scale, 1e-13) << row.num(5) << " " << row.num(6);
@@ -108,15 +109,18 @@ TEST(TurnSensitivity, FieldAndUniformRegion) {
     const double missing = turn_sensitivity(w, 2, 1, CoilParameter::Turns, 0.0, SensitivityQuantity::Field, 0.0, 1e-3);
     // Turn 1 of layer 2: radius 0.0215, z = -0.0045.
     EXPECT_NEAR(missing, -loop_field({0.0215, 1.0, 1.5}, 0.0045, 0.0).bz, 1e-20);
-    const double moved = turn_sensitivity(w, 1, 10, CoilParameter::Position, 1e-4, SensitivityQuantity::Field, 0.0, 1e-3);
-    const double expect = loop_field({0.0205, 1.0, 1.5}, -0.0046, 0.0).bz - loop_field({0.0205, 1.0, 1.5}, -0.0045, 0.0).bz;
+    const double moved =
+        turn_sensitivity(w, 1, 10, CoilParameter::Position, 1e-4, SensitivityQuantity::Field, 0.0, 1e-3);
+    const double expect =
+        loop_field({0.0205, 1.0, 1.5}, -0.0046, 0.0).bz - loop_field({0.0205, 1.0, 1.5}, -0.0045, 0.0).bz;
     EXPECT_NEAR(moved, expect, 1e-12 * std::fabs(expect));
     const double shrink = turn_sensitivity(w, 1, 1, CoilParameter::Turns, 0.0, SensitivityQuantity::Uniform, 0.0, 1e-3);
     EXPECT_LT(shrink, 0.0);
     EXPECT_THROW(turn_sensitivity(w, 4, 1, CoilParameter::Turns, 0, SensitivityQuantity::Field, 0, 1e-3), DomainError);
     EXPECT_THROW(turn_sensitivity(w, 1, 11, CoilParameter::Turns, 0, SensitivityQuantity::Field, 0, 1e-3), DomainError);
     EXPECT_THROW(turn_sensitivity(w, 1, 1, CoilParameter::Length, 0, SensitivityQuantity::Field, 0, 1e-3), DomainError);
-    EXPECT_THROW(turn_sensitivity(w, 1, 1, CoilParameter::Radius, -1, SensitivityQuantity::Field, 0, 1e-3), DomainError);
+    EXPECT_THROW(turn_sensitivity(w, 1, 1, CoilParameter::Radius, -1, SensitivityQuantity::Field, 0, 1e-3),
+                 DomainError);
 }
 
 }  // namespace

@@ -58,8 +58,7 @@ struct Problem {
             out.push_back({inner, outer, section.length, -z, 1.0, sign * w[i] * ampere_turns});
             out.push_back({inner, outer, section.length, z, 1.0, w[i] * ampere_turns});
         }
-        if (centre)
-            out.push_back({section.inner_radius, section.outer_radius, section.length, 0.0, 1.0, ampere_turns});
+        if (centre) out.push_back({section.inner_radius, section.outer_radius, section.length, 0.0, 1.0, ampere_turns});
         return out;
     }
 
@@ -112,9 +111,8 @@ std::vector<double> solve(const Problem& problem, std::vector<double> start) {
 }
 
 std::vector<double> seed_of(const Problem& problem) {
-    const DesignSeed* seed =
-        find_seed(problem.kind == Kind::Gradient, problem.constraint == DesignConstraint::Sphere, problem.pairs,
-                  problem.centre);
+    const DesignSeed* seed = find_seed(problem.kind == Kind::Gradient, problem.constraint == DesignConstraint::Sphere,
+                                       problem.pairs, problem.centre);
     if (seed == nullptr) raise_domain_error("no such design is offered (see the list of designs)");
     return std::vector<double>(seed->x, seed->x + problem.unknowns());
 }
@@ -143,7 +141,8 @@ CoilTable finished(const Problem& problem, const std::vector<double>& x, double 
             (std::fabs(r.centre_z) == std::fabs(nearest->centre_z) && r.centre_z > nearest->centre_z))
             nearest = &r;
     const double reference = std::fabs(nearest->current);
-    for (CoilRow& r : rows) r.current = check::finite_result(r.current / reference * ampere_turns, "an ampere-turn ratio");
+    for (CoilRow& r : rows)
+        r.current = check::finite_result(r.current / reference * ampere_turns, "an ampere-turn ratio");
     return CoilTable(std::move(rows));
 }
 
@@ -151,8 +150,9 @@ void check_no_overlap(const CoilTable& table) {
     const auto& rows = table.rows();
     for (std::size_t i = 1; i < rows.size(); ++i)
         if (rows[i].centre_z - rows[i - 1].centre_z < rows[i].length)
-            raise_domain_error("the windings of this design would overlap (their length is too large for the "
-                               "positions the design needs): shorten them");
+            raise_domain_error(
+                "the windings of this design would overlap (their length is too large for the "
+                "positions the design needs): shorten them");
 }
 
 CoilTable loop_design(Kind kind, double radius, int pairs, double ampere_turns, DesignConstraint constraint,
@@ -184,8 +184,9 @@ CoilTable thick_design(Kind kind, const CoilSection& coil, int pairs, double amp
         const double half_build = 0.5 * t * (outer - inner);
         problem.section = {1.0 - half_build, 1.0 + half_build, t * length};
         if (!problem.admissible(x))
-            raise_domain_error("the windings of this design would overlap (their length is too large for the "
-                               "positions the design needs): shorten them");
+            raise_domain_error(
+                "the windings of this design would overlap (their length is too large for the "
+                "positions the design needs): shorten them");
         x = solve(problem, x);
     }
     problem.section = {inner, outer, length};  // the exact section for the rows
@@ -202,8 +203,7 @@ CoilTable thick_design(Kind kind, const CoilSection& coil, int pairs, double amp
 
 }  // namespace
 
-CoilTable uniform_coils(double radius, int pairs, double ampere_turns, DesignConstraint constraint,
-                        CentreLoop centre) {
+CoilTable uniform_coils(double radius, int pairs, double ampere_turns, DesignConstraint constraint, CentreLoop centre) {
     return loop_design(Kind::Uniform, radius, pairs, ampere_turns, constraint, centre == CentreLoop::Loop);
 }
 

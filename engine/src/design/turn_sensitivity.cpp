@@ -22,7 +22,8 @@ std::size_t turn_index(const LayerWinding& w, double layer, double turn) {
     const int j = static_cast<int>(layer) - 1;
     const double n = layer_turns(w, j);
     if (!(std::isfinite(turn) && turn >= 1.0 && turn <= n && turn == std::floor(turn)))
-        raise_domain_error("turn must be a whole number from 1 to the turns of that layer (" + std::to_string(static_cast<int>(n)) + ")");
+        raise_domain_error("turn must be a whole number from 1 to the turns of that layer (" +
+                           std::to_string(static_cast<int>(n)) + ")");
     std::size_t index = 0;
     for (int k = 0; k < j; ++k) index += static_cast<std::size_t>(layer_turns(w, k));
     return index + static_cast<std::size_t>(turn) - 1;
@@ -37,8 +38,8 @@ CoilTable loops(const std::vector<TurnPosition>& turns, double current) {
 
 }  // namespace
 
-double turn_sensitivity(const LayerWinding& w, double layer, double turn, CoilParameter parameter,
-                        double displacement, SensitivityQuantity quantity, double z0, double tolerance) {
+double turn_sensitivity(const LayerWinding& w, double layer, double turn, CoilParameter parameter, double displacement,
+                        SensitivityQuantity quantity, double z0, double tolerance) {
     std::vector<TurnPosition> turns = winding_turn_positions(w);
     const std::size_t i = turn_index(w, layer, turn);
     check::finite(z0, "z0");

@@ -43,7 +43,8 @@ CoilTable gradient_coils(double radius, int pairs, double ampere_turns, DesignCo
 // gradient pair spacings). Rows: the section, centre z, 1 turn, ampere-turns as current. Found
 // by continuation from the loop design at the section's mean radius as the section grows to its
 // size. DomainError when the windings would overlap.
-CoilTable uniform_thick_coils(const CoilSection& coil, int pairs, double ampere_turns, CentreLoop centre = CentreLoop::None);
+CoilTable uniform_thick_coils(const CoilSection& coil, int pairs, double ampere_turns,
+                              CentreLoop centre = CentreLoop::None);
 CoilTable gradient_thick_coils(const CoilSection& coil, int pairs, double ampere_turns);
 
 // The order of a table at z0: with m the lowest order whose Taylor coefficient of Bz on the axis
