@@ -126,6 +126,11 @@ TEST(HigherOrder, SphereDesignAtLobattoNodes) {
     const CoilTable t = uniform_coils(1.0, 2, 1.0, DesignConstraint::Sphere);
     EXPECT_NEAR(t.rows()[2].centre_z, 0.285231516480645, 1e-14);
     EXPECT_NEAR(t.rows()[3].centre_z, 0.765055323929465, 1e-14);
+    // Gradient sets on the sphere: the nodes of the centre-loop rule (zeros of P'_6 besides 0,
+    // +-0.46884 87934 70714 and +-0.83022 38962 78567: table 25.6, n = 7) without the centre.
+    const CoilTable g = gradient_coils(1.0, 2, 1.0, DesignConstraint::Sphere);
+    EXPECT_NEAR(g.rows()[2].centre_z, 0.468848793470714, 1e-14);
+    EXPECT_NEAR(g.rows()[3].centre_z, 0.830223896278567, 1e-14);
 }
 
 // The thick versions: one pair is PAIR_SPACING / GRADPAIR_SPACING's pair (found there by a

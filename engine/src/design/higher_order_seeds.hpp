@@ -7,8 +7,8 @@
 // Sources: sphere, uniform: the interior Gauss-Lobatto nodes and weights (zeros of P'_(2p+1), or
 // P'_(2p+2) with a centre loop; M. Abramowitz and I. A. Stegun, Handbook of Mathematical
 // Functions, 25.4.32 and table 25.6): a loop at cos(theta) = x on a sphere adds
-// I sin^2(theta) P'_(n+1)(x) to the n-th coefficient of the axial field (M. W. Garrett,
-// J. Appl. Phys. 22 (1951) 1091), and (1 - x^2) P'_(n+1)(x) integrates to zero for n >= 1, so
+// I sin^2(theta) P'_(n+1)(x) to the n-th coefficient of the axial field (the Legendre expansion
+// used by M. W. Garrett, J. Appl. Phys. 22 (1951) 1091; citation from memory), and (1 - x^2) P'_(n+1)(x) integrates to zero for n >= 1, so
 // the Lobatto rule nulls every coefficient up to its degree (one pair: Helmholtz's x = 1/sqrt 5;
 // a centre loop and one pair: Maxwell's sqrt(3/7) and 49/64). The others: found by a
 // multi-start search of the same equations (tests/reference/generate_higher_order_reference.py
