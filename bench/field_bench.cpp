@@ -133,6 +133,13 @@ void thick_near_corner(const Points& p, Output& o) {
     });
 }
 
+// A layer winding of 10 turns x 10 layers summed turn by turn (TURNS_BZ and friends).
+const LayerWinding kTurns{kRadius, 0.01 * kRadius, 10, 10, 1.5, Packing::Square};
+
+void real_turns_100(const Points& p, Output& o) {
+    per_point(p, o, [](double z, double r) { return real_turns_field(kTurns, z, r); });
+}
+
 void stack3_mixed(const Points& p, Output& o) {
     per_point(p, o, [](double z, double r) { return table_field(kMixed, z, r); });
 }
@@ -201,6 +208,7 @@ const Kernel kKernels[] = {
     {"solenoid_offaxis", solenoid_offaxis},        // thin current sheet, one call per point
     {"thick_offaxis", thick_offaxis},              // thick winding, inside it and around it
     {"stack3_mixed", stack3_mixed},                // loop + thin solenoid + thick coil table
+    {"real_turns_100", real_turns_100},            // layer winding of 100 turns summed turn by turn
     {"rig6_circles", rig6_circles},                // coil set: three-axis rig of circles, Bx, By, Bz
     {"rig6_squares", rig6_squares},                // coil set: three-axis rig of squares, Bx, By, Bz
     {"thick_near_corner", thick_near_corner},      // thick winding within 0.1 build of a corner

@@ -47,6 +47,19 @@ inline constexpr double kGradientPoints = 4.0;
 inline constexpr double kRadialSearchPoints = 3000.0;
 inline constexpr double kSphereSearchPoints = 100000.0;
 
+// Higher-order designs: a damped Newton solve on axial jets of order 20 (at most 0.4 ms for
+// loops, 35 ms for four pairs of windings, which continue through 8 cross-sections; measured on
+// a loaded two-core machine). STACK_ORDER: a jet of order 20 per row.
+inline constexpr double kLoopDesign = 1e5;
+inline constexpr double kWindingDesign = 5e6;
+inline constexpr double kOrderJetPerRow = 4.0;
+// Real turns: one scalar loop field per turn per point (59 ns, six units: bench real_turns_100),
+// up to field/real_turns.hpp's 100000 turns (50 ms per point on a loaded machine). The estimate
+// is a winding of about 330 turns; arrays of larger ones end at the call's deadline. TURNS_SENSITIVITY's uniform quantity searches at most
+// 5000 turns twice (28 ms).
+inline constexpr double kRealTurnsPoint = 2000.0;
+inline constexpr double kTurnSensitivity = 3e6;
+
 // Coil sets: a filament rectangle costs two loop fields; a thick rectangle integrates strips in
 // closed form over its depth (0.1 ms near the winding, up to 6 ms deep inside: the call
 // layer's deadline ends calls that meet many such points). Force and torque integrate the

@@ -1,21 +1,11 @@
 // PAIR_COILS, GRADPAIR_COILS, MAXWELL_COILS: coil tables of the classic arrangements.
 #include "coilwright/design.hpp"
 #include "../core/registry.hpp"
+#include "../core/table_result.hpp"
 
 namespace coilwright::sheet {
 
 namespace {
-
-CallResult table_result(const CoilTable& table) {
-    CallResult r;
-    r.rows = table.size();
-    r.cols = kCoilTableColumns;
-    for (const CoilRow& row : table.rows())
-        for (double v : {row.inner_radius, row.outer_radius, row.length, row.centre_z, row.turns, row.current})
-            r.values.push_back(v);
-    r.errors.assign(r.values.size(), CellError::None);
-    return r;
-}
 
 // A function of single numbers whose result is a coil table: make(const Fn::Args&).
 template <class Fn, class F>
@@ -23,7 +13,7 @@ Implementation table_maker(F make) {
     return prepared<Fn>([make](std::span<const Arg* const>) {
         Prepared p;
         p.cost = work::kPairSpacingSearch;
-        p.shaped = [make](const double* a) { return table_result(make(Fn::Args::from(a))); };
+        p.shaped = [make](const double* a) { return coil_table_result(make(Fn::Args::from(a))); };
         return p;
     });
 }

@@ -100,6 +100,23 @@ Conductor conductor(FuzzInput& in) { return static_cast<Conductor>(in.below(3));
 Packing packing(FuzzInput& in) { return static_cast<Packing>(in.below(3)); }
 CoilParameter parameter(FuzzInput& in) { return static_cast<CoilParameter>(in.below(8)); }
 std::size_t row_index(FuzzInput& in) { return in.below(4); }
+DesignConstraint constraint(FuzzInput& in) { return static_cast<DesignConstraint>(in.below(3)); }  // 2 names none
+CentreLoop centre(FuzzInput& in) { return static_cast<CentreLoop>(in.below(2)); }
+int pairs(FuzzInput& in) { return static_cast<int>(in.below(6)); }  // 0 and 5 are out of range
+LayerWinding layer_winding(FuzzInput& in) {
+    return {in.number(), in.number(), in.number(), in.number(), in.number(), packing(in)};
+}
+
+void finite(const std::vector<TurnPosition>& turns, const char* what) {
+    for (const TurnPosition& t : turns) {
+        finite(t.radius, what);
+        finite(t.z, what);
+    }
+}
+
+void finite(const ThickCoilSpec& s, const char* what) {
+    for (double v : {s.inner_radius, s.outer_radius, s.length, s.turns, s.current}) finite(v, what);
+}
 Eigen::Vector3d point(FuzzInput& in) { return {in.number(), in.number(), in.number()}; }
 
 struct EntryPoint {
@@ -189,6 +206,13 @@ const EntryPoint kEntryPoints[] = {
     ENTRY(uniform_length_sensitivity, finite(uniform_length_sensitivity(table(in), row_index(in), parameter(in), N, N), "uniform_length_sensitivity")),
     ENTRY(sensitivity, finite(sensitivity(table(in), row_index(in), parameter(in), static_cast<SensitivityQuantity>(in.below(3)), N, N), "sensitivity")),
     ENTRY(perturbed, finite(perturbed(table(in), row_index(in), parameter(in), N), "perturbed")),
+    ENTRY(uniform_coils, finite(uniform_coils(N, pairs(in), N, constraint(in), centre(in)), "uniform_coils")),
+    ENTRY(gradient_coils, finite(gradient_coils(N, pairs(in), N, constraint(in)), "gradient_coils")),
+    ENTRY(uniform_thick_coils, finite(uniform_thick_coils(section(in), pairs(in), N, centre(in)), "uniform_thick_coils")),
+    ENTRY(gradient_thick_coils, finite(gradient_thick_coils(section(in), pairs(in), N), "gradient_thick_coils")),
+    ENTRY(design_order, finite(static_cast<double>(design_order(table(in), N)), "design_order")),
+    ENTRY(turn_sensitivity, finite(turn_sensitivity(layer_winding(in), N, N, parameter(in), N,
+                                                    static_cast<SensitivityQuantity>(in.below(3)), N, N), "turn_sensitivity")),
     // wire
     ENTRY(parse_awg_gauge, finite(parse_awg_gauge(in.text()), "parse_awg_gauge")),
     ENTRY(awg_diameter, finite(awg_diameter(N), "awg_diameter")),
@@ -205,6 +229,13 @@ const EntryPoint kEntryPoints[] = {
     ENTRY(winding_wire_length, finite(winding_wire_length(N, N, N, N, packing(in)), "winding_wire_length")),
     ENTRY(winding_fill, finite(winding_fill(N, N, N, N), "winding_fill")),
     ENTRY(winding_mean_turn, finite(winding_mean_turn(N, N), "winding_mean_turn")),
+    ENTRY(winding_turn_positions, finite(winding_turn_positions(layer_winding(in)), "winding_turn_positions")),
+    ENTRY(layer_turns, finite(layer_turns(layer_winding(in), static_cast<int>(in.below(4))), "layer_turns")),
+    ENTRY(winding_total_turns, finite(winding_total_turns(layer_winding(in)), "winding_total_turns")),
+    ENTRY(real_turns_field, finite(real_turns_field(layer_winding(in), N, N), "real_turns_field")),
+    ENTRY(real_turns_bphi, finite(real_turns_bphi(layer_winding(in), N, N), "real_turns_bphi")),
+    ENTRY(smooth_winding, finite(smooth_winding(layer_winding(in)), "smooth_winding")),
+    ENTRY(real_turns_model_error, finite(real_turns_model_error(layer_winding(in), N, N), "real_turns_model_error")),
     ENTRY(winding_mean_turn_rect, finite(winding_mean_turn_rect(N, N, N), "winding_mean_turn_rect")),
     ENTRY(coil_resistance, finite(coil_resistance(N, N, N, conductor(in), N), "coil_resistance")),
     ENTRY(coil_voltage, finite(coil_voltage(N, N), "coil_voltage")),

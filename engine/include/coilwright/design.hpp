@@ -5,8 +5,10 @@
 
 #include "coilwright/coil_table.hpp"
 #include "coilwright/design/arrangements.hpp"
+#include "coilwright/design/higher_order.hpp"
 #include "coilwright/design/pair_spacing.hpp"
 #include "coilwright/design/scaling.hpp"
 #include "coilwright/design/sensitivity.hpp"
+#include "coilwright/design/turn_sensitivity.hpp"
 #include "coilwright/design/uniform_region.hpp"
 #include "coilwright/errors.hpp"

@@ -12,6 +12,7 @@
 #include "coilwright/field/gradient.hpp"
 #include "coilwright/field/loop.hpp"
 #include "coilwright/field/loop_batch.hpp"
+#include "coilwright/field/real_turns.hpp"
 #include "coilwright/field/rect.hpp"
 #include "coilwright/field/solenoid.hpp"
 #include "coilwright/field/table_field.hpp"

@@ -9,8 +9,11 @@ namespace coilwright::internal {
 
 using AxialJet = Jet<kMaxAxialOrder + 1>;
 
+// Jets long enough for the higher-order designs (orders 0..20).
+inline constexpr std::size_t kDesignJetSize = 21;
+
 // Bz on the axis as a jet in z around z0 (coefficients of (z - z0)^k), with the first N
-// coefficients; instantiated for N = 1, 2, 3, 4 and kMaxAxialOrder + 1. Closed forms: loop
+// coefficients; instantiated for N = 1, 2, 3, 4, kMaxAxialOrder + 1 and kDesignJetSize. Closed forms: loop
 // mu0 N I a^2 / (2 (a^2+u^2)^(3/2)); thin solenoid mu0 N I / (2 L) [u1/sqrt(a^2+u1^2) -
 // u2/sqrt(a^2+u2^2)]; thick winding (uniform current density) mu0 N I / (2 L (a2-a1))
 // [F(u1) - F(u2)], F(u) = u ln((a2+sqrt(a2^2+u^2))/(a1+sqrt(a1^2+u^2))) (D. B. Montgomery,
