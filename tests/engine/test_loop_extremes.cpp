@@ -4,6 +4,7 @@
 
 #include <cmath>
 #include <limits>
+#include <numbers>
 
 #include "numerics/bulirsch_cel.hpp"
 #include "coilwright/errors.hpp"
@@ -28,7 +29,7 @@ TEST(LoopExtremes, VeryCloseToTheWireIsStillComputed) {
     const double a = 1.0, d = 1e-100;
     const FieldRZ f = loop_field({a, 1, 1}, d, a);
     ASSERT_TRUE(std::isfinite(f.bz) && std::isfinite(f.br));
-    const double straight_wire = 1.25663706127e-6 / (2 * M_PI * d);  // CODATA 2022 mu0
+    const double straight_wire = 1.25663706127e-6 / (2 * std::numbers::pi * d);  // CODATA 2022 mu0
     EXPECT_NEAR(f.magnitude() / straight_wire, 1.0, 1e-12);
 }
 

@@ -60,6 +60,57 @@ OLDEST_LINUX = {
 }
 
 
+# Each platform an .oxt may carry a library for (the manifest's platform= value is $_OS_$_ARCH of
+# that LibreOffice, compared ignoring case): the UNO C++ bridge its .components file names, and
+# how its library file starts (its object format and machine). Tokens and $_OS/$_ARCH pairs from
+# LibreOffice's desktop/source/deployment/misc/dp_platform.cxx; bridges from its bridges/ folder.
+# Object formats: ELF (e_machine 0x3E x86-64, 0xB7 AArch64, System V gABI), PE (machine 0x8664
+# x64, 0xAA64 Arm64, Microsoft PE format specification), Mach-O 64 (cputype 0x01000007 x86_64,
+# 0x0100000C arm64, Apple's <mach/machine.h>).
+PLATFORMS = {
+    "linux_x86_64": ("gcc3", "elf", 0x3E),
+    "linux_aarch64": ("gcc3", "elf", 0xB7),
+    "windows_x86_64": ("mscx", "pe", 0x8664),
+    "windows_aarch64": ("msca", "pe", 0xAA64),
+    "macosx_x86_64": ("gcc3", "macho", 0x01000007),
+    "macosx_aarch64": ("gcc3", "macho", 0x0100000C),
+}
+MANIFEST_NS = "{http://openoffice.org/2001/manifest}"
+COMPONENTS_NS = "{http://openoffice.org/2010/uno-components}"
+
+
+def object_format(data):
+    """(format, machine) of a library's first bytes, or None."""
+    if data[:4] == b"\x7fELF":
+        return "elf", int.from_bytes(data[18:20], "little")
+    if data[:2] == b"MZ":
+        pe = int.from_bytes(data[0x3C:0x40], "little")
+        if data[pe:pe + 4] == b"PE\0\0":
+            return "pe", int.from_bytes(data[pe + 4:pe + 6], "little")
+    if data[:4] == b"\xcf\xfa\xed\xfe":
+        return "macho", int.from_bytes(data[4:8], "little")
+    return None
+
+
+def manifest_components(z):
+    """{components file: platform token} from the manifest's uno-components entries."""
+    found = {}
+    for entry in ET.fromstring(z.read("META-INF/manifest.xml")).iter(MANIFEST_NS + "file-entry"):
+        media = entry.get(MANIFEST_NS + "media-type")
+        if media.startswith("application/vnd.sun.star.uno-components"):
+            m = re.search(r";platform=(\w+)", media)
+            found[entry.get(MANIFEST_NS + "full-path")] = m.group(1).lower() if m else None
+    return found
+
+
+def component_library(z, components_file):
+    """(library path in the .oxt, bridge) named by a .components file (uri relative to it)."""
+    component = ET.fromstring(z.read(components_file)).find(COMPONENTS_NS + "component")
+    folder = str(pathlib.PurePosixPath(components_file).parent)
+    path = component.get("uri") if folder == "." else f"{folder}/{component.get('uri')}"
+    return path, component.get("environment")
+
+
 def extracted_library(tmp):
     with zipfile.ZipFile(OXT) as z:
         return pathlib.Path(z.extract(LIBRARY, tmp))
@@ -158,7 +209,10 @@ class DeclaredRequirements(unittest.TestCase):
     def test_declares_the_platform_the_library_is_built_for(self):
         platform = self.root.find("d:platform", DESCRIPTION_NS)
         self.assertIsNotNone(platform)
-        self.assertEqual(platform.get("value"), "linux_x86_64")
+        self.assertIn("linux_x86_64", [t.strip() for t in platform.get("value").split(",")])
+        with zipfile.ZipFile(OXT) as z:
+            self.assertEqual(manifest_components(z).get("coilwright.components"), "linux_x86_64")
+            self.assertEqual(component_library(z, "coilwright.components"), (LIBRARY, "gcc3"))
         header = tool("readelf", "-h", str(self.library))
         self.assertRegex(header, r"Class:\s+ELF64")
         self.assertRegex(header, r"Machine:\s+Advanced Micro Devices X86-64")
@@ -233,8 +287,29 @@ class Extension(unittest.TestCase):
         with zipfile.ZipFile(OXT) as z:
             names = set(z.namelist())
             manifest = z.read("META-INF/manifest.xml").decode()
-        self.assertEqual(names, OXT_CONTENT)
+            # Libraries of other platforms (COILWRIGHT_OXT_EXTRA_LIBRARIES) with their .components.
+            others = {f for f in manifest_components(z) if f != "coilwright.components"}
+            others |= {component_library(z, f)[0] for f in others}
+        self.assertEqual(names, OXT_CONTENT | others)
         self.assertNotRegex(manifest, r"(?i)basic|script|macro")
+
+    def test_each_declared_platform_has_one_library_built_for_it(self):
+        # LibreOffice registers the .components file whose platform= is its own system and
+        # ignores the others: each platform in description.xml needs exactly one, naming a
+        # library of that system's object format and machine and that system's C++ bridge.
+        with zipfile.ZipFile(OXT) as z:
+            declared = [t.strip() for t in description().find("d:platform", DESCRIPTION_NS).get("value").split(",")]
+            components = manifest_components(z)
+            self.assertEqual(sorted(components.values()), sorted(declared))
+            for components_file, token in components.items():
+                with self.subTest(platform=token):
+                    self.assertIn(token, PLATFORMS, "a platform LibreOffice does not know")
+                    bridge, form, machine = PLATFORMS[token]
+                    library, environment = component_library(z, components_file)
+                    self.assertEqual(environment, bridge)
+                    self.assertEqual(object_format(z.read(library)[:4096]), (form, machine),
+                                     f"{library} is not a {form} library for {token}")
+        print(f"\nplatforms: {', '.join(declared)}")
 
     def test_description_names_version_and_license(self):
         with zipfile.ZipFile(OXT) as z:
