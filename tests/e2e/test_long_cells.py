@@ -17,16 +17,16 @@ SOLENOID_HANG = "=SOLENOID_BZ(1E308;2;1;1;1+2^-51;1E308)"
 FAST_NOW = [
     "=SUMPRODUCT(COIL_FZ(0.05;0.07;0.02;100;1;0.05;0.07;0.02;100;1;0.05+ROW($A$1:$A$3999)*1E-7))",
     "=SUMPRODUCT(COIL_L(0.05;0.08;0.1+ROW($A$1:$A$3999)*1E-6;800))",
-    # The real turns of a 100000-turn winding at 400 points (about 50 ms a point), and a turn's
-    # uniform-region sensitivity for 100 turns of a 4975-turn winding: ended by the deadline or
-    # refused by the work bound.
-    "=SUMPRODUCT(TURNS_BZ(0.05;0.0005;1000;100;1;ROW($A$1:$A$400)*1E-4;0.01))",
-    '=SUMPRODUCT(TURNS_SENSITIVITY(0.05;0.0005;100;50;1;1;ROW($A$1:$A$100);"position";1E-5;"uniform"))',
 ]
 LONG_CELLS = [
     FAST_NOW[0],
     "=SUMPRODUCT(COIL_B(0.05;0.08;0.1;800;3;0.05+ROW($A$1:$A$2000)*1E-9;0.08+COLUMN($A$1:$ALL$1)*1E-9))",
     FAST_NOW[1],
+    # The real turns of a 100000-turn winding at 400 points (about 50 ms a point), and a turn's
+    # uniform-region sensitivity for 100 turns of a 4975-turn winding: ended by the deadline or
+    # refused by the work bound.
+    "=SUMPRODUCT(TURNS_BZ(0.05;0.0005;1000;100;1;ROW($A$1:$A$400)*1E-4;0.01))",
+    '=SUMPRODUCT(TURNS_SENSITIVITY(0.05;0.0005;100;50;1;1;ROW($A$1:$A$100);"position";1E-5;"uniform"))',
 ]
 
 
