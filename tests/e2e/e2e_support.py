@@ -25,8 +25,8 @@ def read_reference(name):
     return list(csv.DictReader(rows))
 
 
-class CalcTestCase(unittest.TestCase):
-    """Starts LibreOffice with the extension once for the class; a fresh sheet per test."""
+class CalcSessionTestCase(unittest.TestCase):
+    """Starts LibreOffice with the extension once for the class (self.session)."""
 
     @classmethod
     def setUpClass(cls):
@@ -35,6 +35,10 @@ class CalcTestCase(unittest.TestCase):
     @classmethod
     def tearDownClass(cls):
         cls.session.close()
+
+
+class CalcTestCase(CalcSessionTestCase):
+    """A CalcSessionTestCase with a fresh sheet per test."""
 
     def setUp(self):
         self.doc = self.session.new_document()

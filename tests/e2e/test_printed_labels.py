@@ -21,8 +21,8 @@ import uno
 ROOT = pathlib.Path(__file__).resolve().parents[2]
 sys.path.insert(0, str(ROOT / "tools"))
 
-from calc_session import CalcSession, cell_name, props, used_cells  # noqa: E402
-from e2e_support import OXT  # noqa: E402
+from calc_session import cell_name, props, used_cells  # noqa: E402
+from e2e_support import CalcSessionTestCase  # noqa: E402
 
 WORKBOOKS = sorted((ROOT / "sheets").glob("*.ods"))
 EMPTY = uno.Enum("com.sun.star.table.CellContentType", "EMPTY")
@@ -70,15 +70,7 @@ class MissingLabels(unittest.TestCase):
 
 
 @unittest.skipUnless(shutil.which("pdftotext"), "pdftotext (poppler-utils) is needed")
-class PrintedLabels(unittest.TestCase):
-    @classmethod
-    def setUpClass(cls):
-        cls.session = CalcSession(OXT)
-
-    @classmethod
-    def tearDownClass(cls):
-        cls.session.close()
-
+class PrintedLabels(CalcSessionTestCase):
     def test_every_cell_prints_whole(self):
         self.assertGreaterEqual(len(WORKBOOKS), 1)
         with tempfile.TemporaryDirectory() as tmp:

@@ -20,7 +20,7 @@ ROOT = pathlib.Path(__file__).resolve().parents[2]
 sys.path.insert(0, str(ROOT / "tools"))
 
 from calc_session import CalcSession  # noqa: E402
-from e2e_support import OXT  # noqa: E402
+from e2e_support import CalcSessionTestCase  # noqa: E402
 from ods_cells import read_cells  # noqa: E402
 import build_workbooks  # noqa: E402
 import share_workbook  # noqa: E402
@@ -69,15 +69,7 @@ def live_result(cell):
     return "float", cell.getValue()
 
 
-class Workbooks(unittest.TestCase):
-    @classmethod
-    def setUpClass(cls):
-        cls.session = CalcSession(OXT)
-
-    @classmethod
-    def tearDownClass(cls):
-        cls.session.close()
-
+class Workbooks(CalcSessionTestCase):
     def test_there_are_workbooks_and_sources_for_each(self):
         self.assertGreaterEqual(len(WORKBOOKS), 1)
         sources = {p.stem for p in (ROOT / "sheets" / "src").glob("*.py")}
