@@ -100,6 +100,11 @@ TEST(RealTurns, BadInputs) {
     EXPECT_THROW(real_turns_field(ok, 0.0005, 0.0205), SingularPointError);  // a wire's centre
     EXPECT_THROW(real_turns_field(ok, 0, -1), DomainError);
     EXPECT_THROW(real_turns_bphi(ok, NAN, 0.1), DomainError);
+    // Found by fuzzing: a layer count of a winding never validated gave -inf.
+    EXPECT_THROW(layer_turns({0.02, 0.001, -HUGE_VAL, 3, 1.0}, 0), DomainError);
+    EXPECT_THROW(layer_turns(ok, 3), DomainError);
+    EXPECT_THROW(layer_turns(ok, -1), DomainError);
+    EXPECT_EQ(layer_turns({0.02, 0.001, 10, 3, 1.0, Packing::Hexagonal}, 1), 9.0);
 }
 
 // One turn: the field change is that turn's own loop field moved or removed (exact); the

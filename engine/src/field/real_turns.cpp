@@ -25,6 +25,11 @@ double pitch(const LayerWinding& w) {
 
 bool shifted(const LayerWinding& w, int layer) { return w.packing == Packing::Hexagonal && layer % 2 == 1; }
 
+// The turns of a layer of a winding already validated (every second hexagonal layer holds one fewer).
+double turns_in_layer(const LayerWinding& w, int layer) {
+    return shifted(w, layer) ? w.turns_per_layer - 1.0 : w.turns_per_layer;
+}
+
 double layer_radius(const LayerWinding& w, int layer) {
     return w.inner_radius + w.wire_diameter / 2.0 + static_cast<double>(layer) * pitch(w);
 }
@@ -44,13 +49,16 @@ void validate(const LayerWinding& w) {
 }
 
 double layer_turns(const LayerWinding& w, int layer) {
-    return shifted(w, layer) ? w.turns_per_layer - 1.0 : w.turns_per_layer;
+    validate(w);
+    if (layer < 0 || static_cast<double>(layer) >= w.layers)
+        raise_domain_error("the layer must be one of the winding's layers, counted from 0");
+    return turns_in_layer(w, layer);
 }
 
 double winding_total_turns(const LayerWinding& w) {
     validate(w);
     double total = 0.0;
-    for (int j = 0; j < static_cast<int>(w.layers); ++j) total += layer_turns(w, j);
+    for (int j = 0; j < static_cast<int>(w.layers); ++j) total += turns_in_layer(w, j);
     return total;
 }
 
@@ -59,7 +67,7 @@ std::vector<TurnPosition> winding_turn_positions(const LayerWinding& w) {
     std::vector<TurnPosition> turns;
     turns.reserve(static_cast<std::size_t>(w.turns_per_layer * w.layers));
     for (int j = 0; j < static_cast<int>(w.layers); ++j) {
-        const double n = layer_turns(w, j), a = layer_radius(w, j);
+        const double n = turns_in_layer(w, j), a = layer_radius(w, j);
         for (int k = 0; k < static_cast<int>(n); ++k)
             turns.push_back({a, (static_cast<double>(k) - (n - 1.0) / 2.0) * w.wire_diameter});
     }
@@ -85,7 +93,7 @@ double real_turns_bphi(const LayerWinding& w, double z, double r) {
     for (int j = 0; j < static_cast<int>(w.layers); ++j) {
         const double a = layer_radius(w, j);
         if (r < a) continue;
-        const double half = layer_turns(w, j) * w.wire_diameter / 2.0;
+        const double half = turns_in_layer(w, j) * w.wire_diameter / 2.0;
         const double sign = j % 2 == 0 ? 1.0 : -1.0;
         const double ends = (z + half) / std::hypot(z + half, r) - (z - half) / std::hypot(z - half, r);
         sum += (r == a ? 0.5 : 1.0) * sign * ends;
