@@ -104,6 +104,8 @@ TEST(RealTurns, BadInputs) {
     EXPECT_THROW(layer_turns({0.02, 0.001, -HUGE_VAL, 3, 1.0}, 0), DomainError);
     EXPECT_THROW(layer_turns(ok, 3), DomainError);
     EXPECT_THROW(layer_turns(ok, -1), DomainError);
+    EXPECT_THROW(winding_turn_positions({1e308, 1e308, 10, 3, 1.0}), DomainError);
+    EXPECT_THROW(real_turns_field({1.0, 1e306, 1000, 3, 1.0}, 0, 0), DomainError);
     EXPECT_EQ(layer_turns({0.02, 0.001, 10, 3, 1.0, Packing::Hexagonal}, 1), 9.0);
 }
 

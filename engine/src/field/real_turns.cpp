@@ -46,6 +46,10 @@ void validate(const LayerWinding& w) {
         raise_domain_error("packing must be square or hexagonal");
     if (w.turns_per_layer * w.layers > kMaxRealTurns)
         raise_domain_error("turns per layer times layers must be at most 100000 (each turn is summed at every point)");
+    // The outermost layer's radius and the winding's length must be numbers (found by fuzzing).
+    if (!std::isfinite(w.inner_radius + w.wire_diameter * (w.layers + 1.0)) ||
+        !std::isfinite(w.wire_diameter * w.turns_per_layer))
+        raise_domain_error("the winding is too large: its outer radius or length overflows");
 }
 
 double layer_turns(const LayerWinding& w, int layer) {
