@@ -19,6 +19,7 @@
 #include "coilwright/inductance/mutual.hpp"
 #include "coilwright/inductance/self.hpp"
 #include "inductance/section_integral.hpp"
+#include "inductance/separated_sections.hpp"
 #include "inductance/thick_pair.hpp"
 
 namespace coilwright {
@@ -105,6 +106,17 @@ double coil_mutual_inductance_slope(const CoilSection& w1, const CoilSection& w2
 
 namespace {
 
+// Kernel values one product rule may take for cross-sections that keep a gap: beyond, the
+// closed forms (both windings thick) or the refining cubature cost less.
+constexpr int kMaxSeparatedEvaluations = 3000;
+
+// The gap between the cross-sections in the (r, z) half-plane.
+internal::SectionGap section_gap(const CoilSection& w1, const CoilSection& w2, double distance) {
+    const double radial = std::fmax(0.0, std::fmax(w1.inner_radius, w2.inner_radius) - std::fmin(w1.outer_radius, w2.outer_radius));
+    const double axial = std::fmax(0.0, std::fabs(distance) - 0.5 * (w1.length + w2.length));
+    return {std::hypot(radial, axial), radial};
+}
+
 // Both windings with area and length: the angle integral of closed forms (thick_pair.cpp) when
 // its corner sums keep their digits.
 bool both_thick(const CoilSection& w1, const CoilSection& w2) {
@@ -112,29 +124,38 @@ bool both_thick(const CoilSection& w1, const CoilSection& w2) {
 }
 
 double mutual_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
+    if (const auto m = internal::average_over_separated_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual,
+                                                                 section_gap(w1, w2, distance), kMaxSeparatedEvaluations))
+        return *m;
     if (both_thick(w1, w2)) {
         if (const auto m = internal::thick_pair_angle_integral(w1, w2, distance, internal::PairQuantity::Mutual)) return *m;
     }
-    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
     return internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
 }
 
 double slope_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
+    if (distance == 0.0) {
+        if (w1.length == 0.0 && w2.length == 0.0 && w1.inner_radius == w1.outer_radius &&
+            w2.inner_radius == w2.outer_radius && w1.inner_radius == w2.inner_radius)
+            raise_singular_point("the two loops coincide: the force between them is undefined");
+        return 0.0;  // windings centred on each other: no axial force, by symmetry
+    }
+    const internal::SectionGap gap = section_gap(w1, w2, distance);
+    if (gap.total > 0.0) {
+        const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kOdd);
+        if (const auto s = internal::average_over_separated_sections(radial(w1), radial(w2), u, FilamentKernel::Slope, gap,
+                                                                     kMaxSeparatedEvaluations))
+            return *s;
+    }
     if (both_thick(w1, w2)) {
         if (const auto m = internal::thick_pair_angle_integral(w1, w2, distance, internal::PairQuantity::Slope)) return *m;
     }
     const double h1 = w1.length, h2 = w2.length;
     const double reach = 0.5 * (h1 + h2);  // the offsets span distance -+ reach
-    const double radial_gap = std::fmax(0.0, std::fmax(w1.inner_radius, w2.inner_radius) - std::fmin(w1.outer_radius, w2.outer_radius));
-    const double axial_gap = std::fmax(0.0, std::fabs(distance) - reach);
-    const bool apart = std::hypot(radial_gap, axial_gap) >= 0.25 * (h1 + h2);
+    const bool apart = gap.total >= 0.25 * (h1 + h2);
     double slope;
     if (h1 == 0.0 && h2 == 0.0) {
-        if (distance == 0.0) {
-            if (w1.inner_radius == w1.outer_radius && w2.inner_radius == w2.outer_radius && w1.inner_radius == w2.inner_radius)
-                raise_singular_point("the two loops coincide: the force between them is undefined");
-            return 0.0;  // flat windings in one plane: no axial force, by symmetry
-        }
         OffsetWeights u;
         u.add_point(distance, 1.0, kOdd);
         slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Slope);
