@@ -98,16 +98,25 @@ double filament_sum(const Nodes& x, const Nodes& y, const Nodes& offsets, Filame
 // With B the field per ampere of the loop of radius x at (z = u, r = y):
 //   dM/du = -2 pi y Br,  dM/dy = 2 pi y Bz (the flux through the circle y grows by its rim),
 // and M, homogeneous of degree 1 in (x, y, u), is x dM/dx + y dM/dy + u dM/du (Euler), where by
-// symmetry dM/dx = 2 pi x Bz' with Bz' the field of the loop y at (u, x). The three terms cancel
-// at most sevenfold (far apart: 1/2 + 1/2 - 3/4 of their sum of magnitudes 7/4).
+// symmetry dM/dx = 2 pi x Bz' with Bz' the field of the loop y at (u, x). Far apart the three
+// terms cancel sevenfold (1/2 + 1/2 - 3/4 of their magnitudes 7/4); near filaments of a large
+// radius a at a gap g, like (a / g) / ln(a / g): the magnitudes are summed too, and where they
+// would cost more than kMaxEulerLoss, Maxwell's formula is evaluated at the nodes instead.
+constexpr double kMaxEulerLoss = 64.0;
+
+struct Sum {
+    double value = 0.0, magnitude = 0.0;
+};
+
 class NodeFields {
 public:
     explicit NodeFields(const Nodes& offsets) : offsets_(offsets) {}
 
-    // Sum over radii rho_j (weights w_j) and offsets of w_j w_u times the field of the loop of
-    // radius `source` at (u, rho_j), combined as `combine(rho_j, u, bz, br)`.
-    template <class Combine>
-    bool sum_over(double source, const Nodes& radii, Combine combine, double& out) {
+    // Adds, over radii rho_j (weights w_j) and offsets u, w_source w_j w_u times the terms
+    // `terms(rho_j, u, bz, br)` (two numbers) of the field of the loop of radius `source` at
+    // (u, rho_j). False when a field value is not finite.
+    template <class Terms>
+    bool add(double source, double source_weight, const Nodes& radii, Terms terms, Sum& sum) {
         const std::size_t n = static_cast<std::size_t>(radii.count) * offsets_.count;
         z_.resize(n);
         r_.resize(n);
@@ -119,23 +128,51 @@ public:
                 r_[j * offsets_.count + m] = radii.at[j];
             }
         if (loop_field_batch({source, 1.0, 1.0}, z_.data(), r_.data(), n, bz_.data(), br_.data()) != 0) return false;
-        double sum = 0.0;
         for (int j = 0; j < radii.count; ++j) {
-            double inner = 0.0;
             for (int m = 0; m < offsets_.count; ++m) {
                 const std::size_t i = j * offsets_.count + m;
-                inner += offsets_.weight[m] * combine(radii.at[j], offsets_.at[m], bz_[i], br_[i]);
+                const double w = source_weight * radii.weight[j] * offsets_.weight[m];
+                const auto [first, second] = terms(radii.at[j], offsets_.at[m], bz_[i], br_[i]);
+                sum.value += w * (first + second);
+                sum.magnitude += std::fabs(w) * (std::fabs(first) + std::fabs(second));
             }
-            sum += radii.weight[j] * inner;
         }
-        out = sum;
-        return std::isfinite(sum);
+        return std::isfinite(sum.magnitude);
     }
 
 private:
     const Nodes& offsets_;
     std::vector<double> z_, r_, bz_, br_;
 };
+
+using Terms = std::array<double, 2>;
+
+// The rule with loop fields; nothing when a value is not finite.
+std::optional<Sum> field_sum(const Nodes& x, const Nodes& y, const Nodes& offsets, FilamentKernel kernel) {
+    NodeFields fields(offsets);
+    Sum sum;
+    for (int i = 0; i < x.count; ++i) {
+        const bool ok = kernel == FilamentKernel::Slope
+                            ? fields.add(x.at[i], x.weight[i], y,
+                                         [](double rho, double, double, double br) { return Terms{-rho * br, 0.0}; }, sum)
+                            : fields.add(x.at[i], x.weight[i], y,
+                                         [](double rho, double v, double bz, double br) {
+                                             return Terms{rho * rho * bz, -rho * v * br};
+                                         },
+                                         sum);
+        if (!ok) return std::nullopt;
+    }
+    if (kernel == FilamentKernel::Mutual) {
+        for (int j = 0; j < y.count; ++j) {  // the x dM/dx term: loops y at the radii x
+            if (!fields.add(y.at[j], y.weight[j], x,
+                            [](double rho, double, double bz, double) { return Terms{rho * rho * bz, 0.0}; }, sum))
+                return std::nullopt;
+        }
+    }
+    sum.value *= 2.0 * kPi;
+    sum.magnitude *= 2.0 * kPi;
+    return sum;
+}
 
 }  // namespace
 
@@ -148,27 +185,11 @@ std::optional<double> average_over_separated_sections(RadialExtent r1, RadialExt
     const long evaluations = static_cast<long>(x.count) * y.count * offsets.count;
     if (evaluations > max_evaluations) return std::nullopt;
     if (evaluations <= kScalarUpTo) return filament_sum(x, y, offsets, kernel);
-    NodeFields fields(offsets);
-    double sum = 0.0;
-    for (int i = 0; i < x.count; ++i) {
-        double part = 0.0;
-        const bool ok =
-            kernel == FilamentKernel::Slope
-                ? fields.sum_over(x.at[i], y, [](double rho, double, double, double br) { return -rho * br; }, part)
-                : fields.sum_over(
-                      x.at[i], y, [](double rho, double v, double bz, double br) { return rho * (rho * bz - v * br); }, part);
-        if (!ok) return std::nullopt;
-        sum += x.weight[i] * part;
-    }
-    if (kernel == FilamentKernel::Mutual) {
-        for (int j = 0; j < y.count; ++j) {  // the x dM/dx term: loops y at the radii x
-            double part = 0.0;
-            if (!fields.sum_over(y.at[j], x, [](double rho, double, double bz, double) { return rho * rho * bz; }, part))
-                return std::nullopt;
-            sum += y.weight[j] * part;
-        }
-    }
-    return 2.0 * kPi * sum;
+    const std::optional<Sum> fast = field_sum(x, y, offsets, kernel);
+    if (!fast) return std::nullopt;
+    if (kernel == FilamentKernel::Mutual && fast->magnitude > kMaxEulerLoss * std::fabs(fast->value))
+        return filament_sum(x, y, offsets, kernel);
+    return fast->value;
 }
 
 }  // namespace coilwright::internal
