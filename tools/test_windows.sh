@@ -47,10 +47,11 @@ if [ ! -f "$prefix/lib/cmake/GTest/GTestConfig.cmake" ]; then
   cmake --build "$out/googletest" -j"$jobs" --target install >> "$log" 2>&1 || fail
 fi
 
-# -O1: these programs check results, not speed, and compile in far less time than at -O3.
+# -O1: these programs check results, not speed, and compile in far less time than at -O3; the
+# engine as a few large units.
 cmake -S . -B "$out/coilwright" -DCMAKE_TOOLCHAIN_FILE="$toolchain" \
   -DCOILWRIGHT_WINDOWS_PREFIX="$prefix" -DCMAKE_BUILD_TYPE=Release -DCOILWRIGHT_ADDIN=OFF \
-  -DCMAKE_CXX_FLAGS_RELEASE="-O1 -DNDEBUG" \
+  -DCMAKE_CXX_FLAGS_RELEASE="-O1 -DNDEBUG" -DCOILWRIGHT_UNITY_BUILD=ON \
   >> "$log" 2>&1 || fail
 cmake --build "$out/coilwright" -j"$jobs" >> "$log" 2>&1 || fail
 rm -f "$log"

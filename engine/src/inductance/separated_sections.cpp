@@ -30,7 +30,7 @@ namespace coilwright::internal {
 
 namespace {
 
-constexpr double kOrderExponent = 20.8;  // ln(1e18) / 2
+constexpr double kSeparatedOrderExponent = 20.8;  // ln(1e18) / 2
 constexpr int kMinOrder = 2;
 constexpr std::size_t kMaxOffsetNodes = OffsetWeights{}.pieces.size() * kMaxGaussOrder + OffsetWeights{}.points.size();
 
@@ -45,7 +45,7 @@ struct Nodes {
 
 // The order for an interval with the ellipse parameter rho, or 0 when above kMaxGaussOrder.
 int order_for(double rho) {
-    const int n = std::max(gauss_points_for(rho, kOrderExponent), kMinOrder);
+    const int n = std::max(gauss_points_for(rho, kSeparatedOrderExponent), kMinOrder);
     return n <= kMaxGaussOrder ? n : 0;
 }
 

@@ -4,6 +4,7 @@
 #include <string>
 
 #include "numerics/checks.hpp"
+#include "wire/temperature_checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"
 
@@ -13,16 +14,10 @@ using namespace internal;
 
 namespace {
 
-void check_temperature(double t, const char* name) {
-    check::finite(t, name);
-    if (t < kMinConductorTemperature || t > kMaxConductorTemperature)
-        raise_domain_error(std::string(name) + " must lie between -100 and 400 C");
-}
-
 void check_cooling(double area, double h, double ambient_c) {
     check::positive(area, "cooling area");
     check::positive(h, "heat-transfer coefficient");
-    check_temperature(ambient_c, "ambient temperature");
+    check_conductor_temperature(ambient_c, "ambient temperature");
 }
 
 HotState settle(double r20, double rise, double ambient_c, Conductor c) {
@@ -111,7 +106,7 @@ HotState hot_state_at_voltage(double r20, double voltage, double area, double am
 double coil_max_current(double r20, double area, double max_temperature_c, double ambient_c, double h, Conductor c) {
     check::positive(r20, "resistance at 20 C");
     check_cooling(area, h, ambient_c);
-    check_temperature(max_temperature_c, "maximum temperature");
+    check_conductor_temperature(max_temperature_c, "maximum temperature");
     if (!(max_temperature_c > ambient_c)) raise_domain_error("maximum temperature must be above the ambient temperature");
     const double r_max = r20 * (1.0 + conductor_data(c).temp_coefficient * (max_temperature_c - 20.0));
     return check::finite_result(std::sqrt(h * area * (max_temperature_c - ambient_c) / r_max), "current");

@@ -5,6 +5,7 @@
 
 #include "coilwright/constants.hpp"
 #include "numerics/checks.hpp"
+#include "wire/temperature_checks.hpp"
 
 namespace coilwright {
 
@@ -59,12 +60,6 @@ double both_cooled_bracket(double w) {
     return sum;
 }
 
-void check_temperature(double t, const char* name) {
-    check::finite(t, name);
-    if (t < kMinConductorTemperature || t > kMaxConductorTemperature)
-        raise_domain_error(std::string(name) + " must lie between -100 and 400 C");
-}
-
 // (1 - exp(-x)) / x, 1 at x = 0; for x < 0 it grows like exp(-x) / |x| (overflows to inf).
 double relaxation(double x) { return x == 0.0 ? 1.0 : -std::expm1(-x) / x; }
 
@@ -95,7 +90,7 @@ double coil_temperature_at_time(double r20, double current, double area, double 
     check::positive(area, "cooling area");
     check::positive(heat_capacity, "heat capacity");
     check::non_negative(time, "time");
-    check_temperature(ambient_c, "ambient temperature");
+    check_conductor_temperature(ambient_c, "ambient temperature");
     check::positive(h, "heat-transfer coefficient");
     const double alpha = conductor_data(c).temp_coefficient;
     const double i2r = current * current * r20;
@@ -116,7 +111,7 @@ double pulse_temperature_rise(double r20, double current, double duration, doubl
     check::finite(current, "current");
     check::non_negative(duration, "pulse time");
     check::positive(heat_capacity, "heat capacity");
-    check_temperature(start_c, "start temperature");
+    check_conductor_temperature(start_c, "start temperature");
     const double alpha = conductor_data(c).temp_coefficient;
     const double exponent = alpha * (current * current * r20) * duration / heat_capacity;
     const double rise = (1.0 / alpha + start_c - 20.0) * std::expm1(exponent);

@@ -12,7 +12,7 @@
 using namespace coilwright;
 
 namespace {
-constexpr double kPiLit = 3.14159265358979323846;
+constexpr double kPiDigits = 3.14159265358979323846;
 constexpr double kEps0 = 8.8541878188e-12;  // CODATA 2022, F/m
 }  // namespace
 
@@ -47,11 +47,11 @@ TEST(SelfCapacitance, TurnToTurnFormulaIsTheIntegralOfItsCell) {
             const int n = 200000;
             double sum = 0.0;
             for (int i = 0; i < n; ++i) {
-                const double t = (i + 0.5) * (kPiLit / 6.0) / n;
+                const double t = (i + 0.5) * (kPiDigits / 6.0) / n;
                 const double insulation = eps_r / (2.0 * ln), air = 1.0 / (2.0 * (1.0 - std::cos(t)));
                 sum += std::min(insulation, air);
             }
-            const double integral = 2.0 * kEps0 * sum * (kPiLit / 6.0) / n;
+            const double integral = 2.0 * kEps0 * sum * (kPiDigits / 6.0) / n;
             EXPECT_NEAR(internal::turn_to_turn_capacitance_per_length(1.0, ratio, eps_r) / integral, 1.0, 1e-6)
                 << ratio << " " << eps_r;
         }
@@ -73,7 +73,7 @@ TEST(SelfCapacitance, MultilayerIsTheEnergyOfTheTurnNetwork) {
             double energy = 0.0;  // for V = 1
             for (int k = 0; k + 1 < layers; ++k) {
                 const double r_gap = ri + (k + 1) * d_o;
-                const double c_cell = per_length * 2.0 * kPiLit * r_gap;
+                const double c_cell = per_length * 2.0 * kPiDigits * r_gap;
                 for (int j = 0; j < per_layer; ++j) {
                     const double dv = (index(k + 1, j) - index(k, j)) / static_cast<double>(total);
                     energy += 0.5 * c_cell * dv * dv;
@@ -107,7 +107,7 @@ TEST(SelfCapacitance, RejectsBadArguments) {
 }
 
 TEST(SelfResonance, IsOneOverTwoPiRootLC) {
-    EXPECT_NEAR(coil_srf(1e-3, 100e-12) / (1.0 / (2.0 * kPiLit * std::sqrt(1e-13))), 1.0, 1e-15);
+    EXPECT_NEAR(coil_srf(1e-3, 100e-12) / (1.0 / (2.0 * kPiDigits * std::sqrt(1e-13))), 1.0, 1e-15);
     EXPECT_THROW(coil_srf(0.0, 1e-12), DomainError);
     EXPECT_THROW(coil_srf(1e-3, 0.0), DomainError);
     EXPECT_THROW(coil_srf(1e-3, -1e-12), DomainError);

@@ -115,7 +115,9 @@ TEST(Rig3, GeometryAndField) {
             const CoilSet pair({rows[2 * axis], rows[2 * axis + 1]});
             const Eigen::Vector3d b = set_field(pair, Eigen::Vector3d::Zero());
             for (int k = 0; k < 3; ++k) {
-                if (k != axis) EXPECT_LT(std::fabs(b[k]), 1e-15 * b.norm());
+                if (k != axis) {
+                    EXPECT_LT(std::fabs(b[k]), 1e-15 * b.norm());
+                }
             }
             EXPECT_GT(b[axis], 0.0);
         }
