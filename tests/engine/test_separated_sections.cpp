@@ -144,3 +144,16 @@ TEST(SeparatedSections, SmallWindingsCloseTogetherKeepTheirDigits) {
         }
     }
 }
+
+TEST(SeparatedSections, ShortWindingsFarAwayKeepTheirShare) {
+    // A winding whose length is below a few units in the last place of the distance: the rounded
+    // ends of its offset range misstate the width (a 1e-2 error at 1e-14, M = 0 below 1e-16
+    // before the fix). Its M must be the loop's, to the (length / distance)^2 it differs by.
+    for (const double ratio : {1e-10, 1e-14, 1e-17}) {
+        const double d = 3.0, h = ratio * d;
+        EXPECT_LT(rel(coil_mutual_inductance({1, 1, 0}, {0.5, 0.5, h}, d), loop_mutual_inductance(1, 0.5, d)), 1e-13) << ratio;
+        EXPECT_LT(rel(coil_mutual_inductance({1, 1, h}, {0.5, 0.5, 2 * h}, d), loop_mutual_inductance(1, 0.5, d)), 1e-13) << ratio;
+        EXPECT_LT(rel(coil_mutual_inductance_slope({1, 1, h}, {0.5, 0.5, h}, -d), loop_mutual_inductance_slope(1, 0.5, -d)), 1e-13)
+            << ratio;
+    }
+}

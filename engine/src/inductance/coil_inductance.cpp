@@ -51,6 +51,19 @@ void check_pair(const CoilSection& w1, const CoilSection& w2, double distance) {
                           "outside the accurate range");
 }
 
+// A piece of the offsets' weight whose true width is `width`. Far away (lengths below a few
+// units in the last place of the distance) the rounded ends misstate the width, and so the
+// piece's share: its weight is rescaled to the true share, and a piece that rounds to nothing
+// becomes a point of that share (the kernel hardly varies over it).
+void add_offset_piece(OffsetWeights& w, double lo, double hi, double width, double w_lo, double w_hi, int parity) {
+    if (hi > lo) {
+        const double scale = width / (hi - lo);
+        w.add_piece(lo, hi, w_lo * scale, w_hi * scale, parity);
+    } else {
+        w.add_point(lo, 0.5 * (w_lo + w_hi) * width, parity);
+    }
+}
+
 // The weight of u = z2 - z1 for windings of lengths h1, h2 whose centres are d apart.
 OffsetWeights offset_weights(double h1, double h2, double d, int parity) {
     OffsetWeights w;
@@ -58,14 +71,14 @@ OffsetWeights offset_weights(double h1, double h2, double d, int parity) {
         w.add_point(d, 1.0, parity);
     } else if (h1 == 0.0 || h2 == 0.0) {
         const double h = h1 + h2;
-        w.add_piece(d - 0.5 * h, d + 0.5 * h, 1.0 / h, 1.0 / h, parity);
+        add_offset_piece(w, d - 0.5 * h, d + 0.5 * h, h, 1.0 / h, 1.0 / h, parity);
     } else {
-        const double shorter = std::fmin(h1, h2), height = 1.0 / std::fmax(h1, h2);
+        const double shorter = std::fmin(h1, h2), longer = std::fmax(h1, h2), height = 1.0 / longer;
         const double a = d - 0.5 * (h1 + h2), dd = d + 0.5 * (h1 + h2);
         const double b = a + shorter, c = dd - shorter;
-        w.add_piece(a, b, 0.0, height, parity);
-        w.add_piece(b, c, height, height, parity);
-        w.add_piece(c, dd, height, 0.0, parity);
+        add_offset_piece(w, a, b, shorter, 0.0, height, parity);
+        if (longer > shorter) add_offset_piece(w, b, c, longer - shorter, height, height, parity);
+        add_offset_piece(w, c, dd, shorter, height, 0.0, parity);
     }
     return w;
 }
