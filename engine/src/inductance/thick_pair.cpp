@@ -25,9 +25,11 @@
 #include <boost/math/quadrature/gauss.hpp>
 #include <cmath>
 #include <limits>
+#include <type_traits>
 #include <utility>
 
 #include "coilwright/constants.hpp"
+#include "inductance/corner_sums.hpp"
 #include "inductance/rectangular_primitive.hpp"
 #include "numerics/gauss_legendre.hpp"
 
@@ -96,11 +98,24 @@ template <class Real>
 void add_angle(const Corners<Real>& corners, int k, double phi, double weight, Sums<Real>& sums) {
     const AngleValues<Real> a = AngleValues<Real>::of(phi);
     Real t = 0, m = 0;
-    for (int i = 0; i < corners.count; ++i) {
-        const Corner<Real>& q = corners.list[i];
-        const Real term = q.weight * rectangular_primitive(a, q.x, q.y, q.u, k);
-        t += term;
-        m += std::fabs(term);
+    if constexpr (std::is_same_v<Real, double>) {
+        std::array<double, 16> x{}, y{}, u{}, w{};
+        for (int i = 0; i < corners.count; ++i) {
+            x[i] = corners.list[i].x;
+            y[i] = corners.list[i].y;
+            u[i] = corners.list[i].u;
+            w[i] = corners.list[i].weight;
+        }
+        const CornerSum sum = corner_sum(a, x.data(), y.data(), u.data(), w.data(), corners.count, k);
+        t = sum.value;
+        m = sum.magnitude;
+    } else {
+        for (int i = 0; i < corners.count; ++i) {
+            const Corner<Real>& q = corners.list[i];
+            const Real term = q.weight * rectangular_primitive(a, q.x, q.y, q.u, k);
+            t += term;
+            m += std::fabs(term);
+        }
     }
     sums.value += weight * a.c * t;
     sums.magnitude += weight * std::fabs(a.c) * m;
