@@ -5,6 +5,7 @@
 
 #include <cmath>
 #include <cstdio>
+#include <optional>
 #include <random>
 
 #include "coilwright/constants.hpp"
@@ -81,7 +82,14 @@ TEST(ThickPair, AgreesWithTheCubatureOnRandomPairs) {
             w2 = w1;
             d = i % 2 ? 0.0 : w1.length;
         }
-        const auto fast = internal::thick_pair_angle_integral(w1, w2, d, internal::PairQuantity::Mutual);
+        // Double where it keeps its digits, else extended precision where that does.
+        const internal::AngleIntegral in_double = internal::thick_pair_angle_integral(
+            w1, w2, d, internal::PairQuantity::Mutual, internal::AnglePrecision::Double);
+        std::optional<double> fast = in_double.value;
+        if (!fast && in_double.extended_may_help)
+            fast = internal::thick_pair_angle_integral(w1, w2, d, internal::PairQuantity::Mutual,
+                                                       internal::AnglePrecision::Extended)
+                       .value;
         if (!fast) continue;
         ++closed_form;
         const double e = rel(*fast, cubature_mutual(w1, w2, d));

@@ -219,18 +219,19 @@ std::pair<double, double> angle_integral(const CoilSection& w1, const CoilSectio
 
 }  // namespace
 
-std::optional<double> thick_pair_angle_integral(const CoilSection& w1, const CoilSection& w2, double distance,
-                                                PairQuantity quantity) {
+AngleIntegral thick_pair_angle_integral(const CoilSection& w1, const CoilSection& w2, double distance,
+                                        PairQuantity quantity, AnglePrecision precision) {
     const int k = quantity == PairQuantity::Mutual ? 2 : 1;
-    const auto [value, loss] = angle_integral<double>(w1, w2, distance, k);
-    if (loss <= kMaxLoss) return value;
-    // Long double carries 11 more bits (x87 extended precision on x86-64, the add-in's target):
-    // the same loss costs 2048 times less, at about five times the time.
-    if (loss <= kMaxLoss * kLongDoubleGain) {
-        const auto [precise, precise_loss] = angle_integral<long double>(w1, w2, distance, k);
-        if (precise_loss <= kMaxLoss * kLongDoubleGain) return precise;
+    if (precision == AnglePrecision::Double) {
+        const auto [value, loss] = angle_integral<double>(w1, w2, distance, k);
+        if (loss <= kMaxLoss) return {value, false};
+        return {std::nullopt, loss <= kMaxLoss * kLongDoubleGain};
     }
-    return std::nullopt;
+    // Long double carries 11 more bits (x87 extended precision on x86-64, the add-in's target):
+    // the same loss costs 2048 times less, at about ten times the time.
+    const auto [precise, precise_loss] = angle_integral<long double>(w1, w2, distance, k);
+    if (precise_loss <= kMaxLoss * kLongDoubleGain) return {precise, false};
+    return {};
 }
 
 }  // namespace coilwright::internal
