@@ -13,12 +13,8 @@ enum class PairQuantity {
     Slope,   // dM/d(distance) (H/m)
 };
 
-// For windings with inner < outer and length > 0 (lengths in units of the larger outer radius,
-// as coil_inductance.cpp passes them). The corner sums of the closed form cancel where windings
-// are thin or long compared with their distance to the axis, or far apart: the caller then
-// takes another method.
-// Double first (fast, four corners at a time where the processor allows); Extended where double
-// would lose too much (long double, x87 extended precision on x86-64).
+// Double (fast, four corners at a time where the processor has AVX2), or Extended where double
+// would lose too much (long double: x87 extended precision on x86-64, about ten times slower).
 enum class AnglePrecision { Double, Extended };
 
 // The value, or nothing when the corner sums would cancel too many digits for an accuracy of
@@ -28,6 +24,10 @@ struct AngleIntegral {
     bool extended_may_help = false;
 };
 
+// For windings with inner < outer and length > 0 (lengths in units of the larger outer radius,
+// as coil_inductance.cpp passes them). The corner sums of the closed form cancel where windings
+// are thin or long compared with their distance to the axis, or far apart: the caller then
+// takes another method.
 AngleIntegral thick_pair_angle_integral(const CoilSection& w1, const CoilSection& w2, double distance,
                                         PairQuantity quantity, AnglePrecision precision);
 
