@@ -26,10 +26,11 @@ CornerSum one_by_one(const AngleValues<double>& a, const double* x, const double
 
 #if defined(COILWRIGHT_HAVE_AVX2_FMA_CODE) && defined(COILWRIGHT_VECTOR_LANES)
 #define COILWRIGHT_CORNER_PACKS 1
-// Four corners a pack; a short last pack repeats the first corner with weight 0.
-[[gnu::target("avx2"), gnu::flatten]] CornerSum in_packs(const AngleValues<double>& a, const double* x,
-                                                         const double* y, const double* u, const double* w,
-                                                         int count, int k) {
+// Four corners a pack; a short last pack repeats the first corner with weight 0. Written for
+// the default processor and inlined into in_packs below: the calls that pass packs stay
+// between functions of one target (clang refuses a pack argument across targets).
+COILWRIGHT_LANE_INLINE CornerSum four_at_a_time(const AngleValues<double>& a, const double* x, const double* y,
+                                                const double* u, const double* w, int count, int k) {
     CornerSum sum;
     for (int first = 0; first < count; first += kPackWidth) {
         Pack px{}, py{}, pu{}, pw{};
@@ -48,6 +49,12 @@ CornerSum one_by_one(const AngleValues<double>& a, const double* x, const double
         }
     }
     return sum;
+}
+
+[[gnu::target("avx2"), gnu::flatten]] CornerSum in_packs(const AngleValues<double>& a, const double* x,
+                                                         const double* y, const double* u, const double* w,
+                                                         int count, int k) {
+    return four_at_a_time(a, x, y, u, w, count, k);
 }
 #endif
 

@@ -57,12 +57,20 @@ namespace rectangular_detail {
 // z - atan(z) for |z| <= 1/4 by its alternating series z^3/3 - z^5/5 + ..., 18 terms (the first
 // left out is below 1e-23 of the sum), in Horner form so that a pack takes it without branches.
 template <class Real, class V>
-inline V z_minus_atan_series(V z) {
+COILWRIGHT_LANE_INLINE V z_minus_atan_series(V z) {
     constexpr int kTerms = 18;
     const V w = z * z;
     V sum = w * Real(0) + Real((kTerms - 1) % 2 == 0 ? 1 : -1) / Real(2 * (kTerms - 1) + 3);
     for (int j = kTerms - 2; j >= 0; --j) sum = sum * w + Real(j % 2 == 0 ? 1 : -1) / Real(2 * j + 3);
     return z * w * sum;
+}
+
+// ln(v + R) for R = sqrt(v^2 + w2): where v < 0 the sum cancels, and the conjugate
+// w2 / (R - v) is taken instead.
+template <class V>
+COILWRIGHT_LANE_INLINE V log_sum(V v, V R, V w2) {
+    const V zero{};
+    return lane_log(lane_select(v >= zero, v + R, w2 / (R - v)));
 }
 
 }  // namespace rectangular_detail
@@ -74,8 +82,11 @@ inline V z_minus_atan_series(V z) {
 // x, y > 0; phi in (0, pi). V is Real, or for Real = double a pack of four corners (Pack,
 // numerics/lanes.hpp), whose lanes each get the value the single corner would, to a few units in
 // the last place (its logarithms and arc tangents are numerics/lane_math.hpp's).
+// Always inlined: the pack copy is compiled inside a function for AVX2 (corner_sums.cpp), and a
+// pack must not cross a call between code built for different processors.
 template <class Real, class V>
-inline V rectangular_primitive(const AngleValues<Real>& a, V x, V y, V u, int k) {
+COILWRIGHT_LANE_INLINE V rectangular_primitive(const AngleValues<Real>& a, V x, V y, V u, int k) {
+    using rectangular_detail::log_sum;
     using rectangular_detail::z_minus_atan_series;
     const Real c = a.c, s = a.s;
     const V zero{};
@@ -83,10 +94,7 @@ inline V rectangular_primitive(const AngleValues<Real>& a, V x, V y, V u, int k)
     const V R2 = rho2 + u * u, R = lane_sqrt(R2), rho = lane_sqrt(rho2);
     const V eta = (y - x) + x * a.one_minus_c, xi = (x - y) + y * a.one_minus_c;
     const V sx = s * x, sy = s * y;
-    // ln(v + R) for R = sqrt(v^2 + w2): where v < 0 the sum cancels, and the conjugate
-    // w2 / (R - v) is taken instead.
-    const auto log_sum = [&](V v, V w2) { return lane_log(lane_select(v >= zero, v + R, w2 / (R - v))); };
-    const V Ly = log_sum(eta, sx * sx + u * u), Lx = log_sum(xi, sy * sy + u * u);
+    const V Ly = log_sum(eta, R, sx * sx + u * u), Lx = log_sum(xi, R, sy * sy + u * u);
     // At u = 0 the terms below vanish (A, the angles) or are multiplied by a power of u (B).
     const V au = lane_abs(u);
     const V A = lane_copysign(lane_log((au + R) / rho), u);
