@@ -22,24 +22,6 @@ namespace {
 
 constexpr int kEven = 1, kOdd = -1;
 
-// The weight of the offset z2 - z1 for windings of lengths h1, h2 whose centres are d apart.
-OffsetWeights offsets(double h1, double h2, double d, int parity) {
-    OffsetWeights w;
-    if (h1 == 0.0 && h2 == 0.0) {
-        w.add_point(d, 1.0, parity);
-    } else if (h1 == 0.0 || h2 == 0.0) {
-        const double h = h1 + h2;
-        w.add_piece(d - 0.5 * h, d + 0.5 * h, 1.0 / h, 1.0 / h, parity);
-    } else {
-        const double shorter = std::fmin(h1, h2), height = 1.0 / std::fmax(h1, h2);
-        const double lo = d - 0.5 * (h1 + h2), hi = d + 0.5 * (h1 + h2);
-        w.add_piece(lo, lo + shorter, 0.0, height, parity);
-        w.add_piece(lo + shorter, hi - shorter, height, height, parity);
-        w.add_piece(hi - shorter, hi, height, 0.0, parity);
-    }
-    return w;
-}
-
 struct Pair {
     CoilSection w1, w2;
     double d;
@@ -84,13 +66,13 @@ TEST(SeparatedSections, AgreesWithTheCubature) {
         const Pair p = random.next(t);
         for (const FilamentKernel kernel : {FilamentKernel::Mutual, FilamentKernel::Slope}) {
             const bool slope = kernel == FilamentKernel::Slope;
-            const OffsetWeights u = offsets(p.w1.length, p.w2.length, p.d, slope ? kOdd : kEven);
+            const OffsetWeights u = winding_offsets(p.w1.length, p.w2.length, p.d, slope ? kOdd : kEven);
             const RadialExtent r1{p.w1.inner_radius, p.w1.outer_radius}, r2{p.w2.inner_radius, p.w2.outer_radius};
             const auto got = average_over_separated_sections(r1, r2, u, kernel, p.gap(), 1'000'000);
             if (!got) continue;  // too close for one rule of at most 20 points a side
             ++used;
             const double ref = average_over_sections(r1, r2, u, kernel);
-            if (slope && std::fabs(ref) < 1e-9 * std::fabs(average_over_sections(r1, r2, offsets(p.w1.length, p.w2.length, p.d, kEven), FilamentKernel::Mutual)))
+            if (slope && std::fabs(ref) < 1e-9 * std::fabs(average_over_sections(r1, r2, winding_offsets(p.w1.length, p.w2.length, p.d, kEven), FilamentKernel::Mutual)))
                 continue;  // a slope that nearly vanishes (nested windings near their centres): relative error meaningless
             const double e = rel(*got, ref);
             EXPECT_LT(e, 1e-13) << t << (slope ? " slope" : " mutual") << " d " << p.d;
@@ -108,7 +90,7 @@ TEST(SeparatedSections, FartherApartTakesFewerNodes) {
     int previous_cap = 1'000'000;
     for (double gap : {0.03, 0.1, 0.3, 1.0}) {
         const Pair p{w1, w2, 0.075 + gap};
-        const OffsetWeights u = offsets(w1.length, w2.length, p.d, kEven);
+        const OffsetWeights u = winding_offsets(w1.length, w2.length, p.d, kEven);
         int cap = 1;
         while (!average_over_separated_sections({0.1, 0.13}, {0.08, 0.12}, u, FilamentKernel::Mutual, p.gap(), cap)) cap *= 2;
         EXPECT_LE(cap, previous_cap) << gap;
@@ -118,7 +100,7 @@ TEST(SeparatedSections, FartherApartTakesFewerNodes) {
 }
 
 TEST(SeparatedSections, TouchingOrOverlappingIsLeftToTheOtherMethods) {
-    const OffsetWeights u = offsets(0.1, 0.1, 0.1, kEven);  // axially touching
+    const OffsetWeights u = winding_offsets(0.1, 0.1, 0.1, kEven);  // axially touching
     EXPECT_FALSE(average_over_separated_sections({0.1, 0.2}, {0.1, 0.2}, u, FilamentKernel::Mutual, {0.0, 0.0}, 1'000'000));
 }
 
@@ -136,7 +118,7 @@ TEST(SeparatedSections, SmallWindingsCloseTogetherKeepTheirDigits) {
             const RadialExtent r1{1.0, 1.0 + size};
             const RadialExtent r2{1.0 + (nested ? 1.5 : 0.5) * size, 1.0 + (nested ? 2.5 : 1.5) * size};
             const double d = nested ? 0.3 * size : 2.0 * size;  // lengths `size`
-            const OffsetWeights u = offsets(size, size, d, kEven);
+            const OffsetWeights u = winding_offsets(size, size, d, kEven);
             const SectionGap gap = nested ? SectionGap{0.5 * size, 0.5 * size} : SectionGap{size, 0.0};
             const auto got = average_over_separated_sections(r1, r2, u, FilamentKernel::Mutual, gap, 1'000'000);
             ASSERT_TRUE(got.has_value()) << size;

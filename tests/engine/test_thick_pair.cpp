@@ -34,12 +34,7 @@ struct RandomPairs {
 // The engine's other route: Maxwell's formula averaged over both cross-sections by adaptive
 // cubature (section_integral.cpp), about 1e-15 (tests/engine/test_winding_inductance.cpp).
 double cubature_mutual(const CoilSection& w1, const CoilSection& w2, double d) {
-    internal::OffsetWeights u;
-    const double h1 = w1.length, h2 = w2.length, shorter = std::fmin(h1, h2), height = 1.0 / std::fmax(h1, h2);
-    const double lo = d - 0.5 * (h1 + h2), hi = d + 0.5 * (h1 + h2);
-    u.add_piece(lo, lo + shorter, 0.0, height, 1);
-    u.add_piece(lo + shorter, hi - shorter, height, height, 1);
-    u.add_piece(hi - shorter, hi, height, 0.0, 1);
+    const internal::OffsetWeights u = internal::winding_offsets(w1.length, w2.length, d, 1);
     return internal::average_over_sections({w1.inner_radius, w1.outer_radius}, {w2.inner_radius, w2.outer_radius}, u,
                                            internal::FilamentKernel::Mutual);
 }

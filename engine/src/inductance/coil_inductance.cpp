@@ -52,37 +52,6 @@ void check_pair(const CoilSection& w1, const CoilSection& w2, double distance) {
                           "outside the accurate range");
 }
 
-// A piece of the offsets' weight whose true width is `width`. Far away (lengths below a few
-// units in the last place of the distance) the rounded ends misstate the width, and so the
-// piece's share: its weight is rescaled to the true share, and a piece that rounds to nothing
-// becomes a point of that share (the kernel hardly varies over it).
-void add_offset_piece(OffsetWeights& w, double lo, double hi, double width, double w_lo, double w_hi, int parity) {
-    if (hi > lo) {
-        const double scale = width / (hi - lo);
-        w.add_piece(lo, hi, w_lo * scale, w_hi * scale, parity);
-    } else {
-        w.add_point(lo, 0.5 * (w_lo + w_hi) * width, parity);
-    }
-}
-
-// The weight of u = z2 - z1 for windings of lengths h1, h2 whose centres are d apart.
-OffsetWeights offset_weights(double h1, double h2, double d, int parity) {
-    OffsetWeights w;
-    if (h1 == 0.0 && h2 == 0.0) {
-        w.add_point(d, 1.0, parity);
-    } else if (h1 == 0.0 || h2 == 0.0) {
-        const double h = h1 + h2;
-        add_offset_piece(w, d - 0.5 * h, d + 0.5 * h, h, 1.0 / h, 1.0 / h, parity);
-    } else {
-        const double shorter = std::fmin(h1, h2), longer = std::fmax(h1, h2), height = 1.0 / longer;
-        const double a = d - 0.5 * (h1 + h2), dd = d + 0.5 * (h1 + h2);
-        const double b = a + shorter, c = dd - shorter;
-        add_offset_piece(w, a, b, shorter, 0.0, height, parity);
-        if (longer > shorter) add_offset_piece(w, b, c, longer - shorter, height, height, parity);
-        add_offset_piece(w, c, dd, shorter, height, 0.0, parity);
-    }
-    return w;
-}
 
 }  // namespace
 
@@ -166,7 +135,7 @@ std::optional<double> fast_methods(const CoilSection& w1, const CoilSection& w2,
 }
 
 double mutual_normalised(const CoilSection& w1, const CoilSection& w2, double distance) {
-    const OffsetWeights u = offset_weights(w1.length, w2.length, distance, kEven);
+    const OffsetWeights u = internal::winding_offsets(w1.length, w2.length, distance, kEven);
     if (const auto m = fast_methods(w1, w2, distance, FilamentKernel::Mutual, u)) return *m;
     return internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Mutual);
 }
@@ -178,7 +147,7 @@ double slope_normalised(const CoilSection& w1, const CoilSection& w2, double dis
             raise_singular_point("the two loops coincide: the force between them is undefined");
         return 0.0;  // windings centred on each other: no axial force, by symmetry
     }
-    if (const auto s = fast_methods(w1, w2, distance, FilamentKernel::Slope, offset_weights(w1.length, w2.length, distance, kOdd)))
+    if (const auto s = fast_methods(w1, w2, distance, FilamentKernel::Slope, internal::winding_offsets(w1.length, w2.length, distance, kOdd)))
         return *s;
     const internal::SectionGap gap = section_gap(w1, w2, distance);
     const double h1 = w1.length, h2 = w2.length;
@@ -190,7 +159,7 @@ double slope_normalised(const CoilSection& w1, const CoilSection& w2, double dis
         u.add_point(distance, 1.0, kOdd);
         slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Slope);
     } else if (apart) {
-        const OffsetWeights u = offset_weights(h1, h2, distance, kOdd);
+        const OffsetWeights u = internal::winding_offsets(h1, h2, distance, kOdd);
         slope = internal::average_over_sections(radial(w1), radial(w2), u, FilamentKernel::Slope);
     } else {
         // By parts: d/dd of the average of M is minus the average of M against the weight's slope.

@@ -39,6 +39,11 @@ struct OffsetWeights {
     void add_point(double u, double mass, int parity);
 };
 
+// The weight of u = z2 - z1 for windings of lengths h1, h2 (either may be 0) whose centres are d
+// apart: a point, a box, or a trapezoid; each piece carries its true share even where the
+// lengths are below the rounding of d.
+OffsetWeights winding_offsets(double h1, double h2, double d, int parity);
+
 enum class FilamentKernel {
     Mutual,  // M(r1, r2, u)
     Slope,   // dM/du (r1, r2, u)
