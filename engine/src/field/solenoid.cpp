@@ -34,10 +34,12 @@
 // The algebra of 2 and 3 is our own arrangement; tests check every branch against mpmath.
 #include "coilwright/field/solenoid.hpp"
 
+#include <algorithm>
 #include <array>
 #include <cmath>
 #include <complex>
 
+#include "field/sheet_end_terms.hpp"
 #include "field/sheet_kernel.hpp"
 #include "field/loop_normalized.hpp"
 #include "numerics/bulirsch_cel.hpp"
@@ -64,8 +66,6 @@ namespace {
 // The split form of W (item 2) loses about a factor 10 / k^2 (measured); below this k^2 the direct
 // sum is used for full precision. Callers that accept a loss L use min(kSplitMinK2, 10 / L).
 constexpr double kSplitMinK2 = 0.7;
-// The trapezoidal sum uses N >= this / strip width points (error ~ exp(-N width)).
-constexpr double kTrapezoidExponent = 40.0;
 // W for r <= 1 is 1/2 - G while G <= 3/8 (loss at most a factor 4), else the direct sum.
 constexpr double kInsideLimit = 0.375;
 // Gauss-Legendre replaces the closed form only where it converges quickly.
@@ -73,150 +73,6 @@ constexpr double kMinQuadratureRho = 3.0;
 // Where centre / half-width of the integration interval exceeds this times max_loss, the closed
 // form would lose more than max_loss (its loss is about centre / (2 half-width)): skip it.
 constexpr double kDirectQuadratureLoss = 4.0;
-
-constexpr double kInvPi = 1.0 / kPi;
-
-// sqrt(x^2 + y^2) without the cost of glibc's hypot (a third of the kernel's time); hypot only
-// where the squares could overflow or underflow.
-inline double norm2(double x, double y) {
-    const double m = std::max(std::fabs(x), std::fabs(y));
-    if (m < 1e150 && m > 1e-150) return std::sqrt(x * x + y * y);
-    return std::hypot(x, y);
-}
-
-template <int N>
-const std::array<double, N / 2 + 1>& half_period_cosines() {
-    static const std::array<double, N / 2 + 1> table = [] {
-        std::array<double, N / 2 + 1> t{};
-        for (int j = 0; j <= N / 2; ++j) t[static_cast<std::size_t>(j)] = std::cos(2.0 * kPi * j / N);
-        return t;
-    }();
-    return table;
-}
-
-// Trapezoidal sum of item 3 with N points per period (even integrand: half a period), all
-// lengths scaled by 1 / s (= t) so that nothing overflows for far points.
-template <int N>
-double solid_angle_sum(double zeta_over_s, double r_over_s, double t) {
-    const auto& cosines = half_period_cosines<N>();
-    double sum = 0.0;
-    for (int j = 0; j <= N / 2; ++j) {
-        const double rc = r_over_s * (cosines[static_cast<std::size_t>(j)] * t);
-        const double rr = std::sqrt(t * t + 1.0 - 2.0 * rc);  // R / s
-        const double f = 1.0 / (rr * (rr + 1.0 - rc));
-        sum += (j == 0 || j == N / 2) ? f : 2.0 * f;
-    }
-    return zeta_over_s * (t * t) * sum / (2.0 * N);
-}
-
-// W = Omega / (4 pi) by the direct sum; needs r^2 + zeta^2 > r (true wherever it is used).
-double disk_part_by_sum(double zeta, double r) {
-    if (r == 0.0) {
-        const double R = norm2(1.0, zeta);
-        return 0.5 / (R * (R + zeta));  // on the axis: (1 - zeta / R) / 2 without cancellation
-    }
-    const double s = norm2(r, zeta);
-    const double t = 1.0 / s;
-    const double strip = std::acosh(0.5 * (s / r) * (s + t));  // acosh((1 + s^2) / (2 r))
-    const double needed = kTrapezoidExponent / strip;
-    const double zs = zeta * t, rs = r * t;
-    if (needed <= 4) return solid_angle_sum<4>(zs, rs, t);
-    if (needed <= 8) return solid_angle_sum<8>(zs, rs, t);
-    if (needed <= 12) return solid_angle_sum<12>(zs, rs, t);
-    if (needed <= 16) return solid_angle_sum<16>(zs, rs, t);
-    if (needed <= 24) return solid_angle_sum<24>(zs, rs, t);
-    if (needed <= 32) return solid_angle_sum<32>(zs, rs, t);
-    if (needed <= 48) return solid_angle_sum<48>(zs, rs, t);
-    return solid_angle_sum<64>(zs, rs, t);  // not reached for the k^2 and G limits above
-}
-
-struct EndGeometry {
-    double beta, kc, zeta_over_beta, k2;
-};
-
-EndGeometry end_geometry(double zeta, double r, double one_minus_r) {
-    const double alpha = norm2(one_minus_r, zeta);
-    const double beta = norm2(1.0 + r, zeta);
-    if (alpha == 0.0) raise_singular_point("the point lies on the rim of the current sheet");
-    return {beta, alpha / beta, zeta / beta, (4.0 * r / beta) / beta};
-}
-
-// -cel(kc, 1, 1, -1) / k^2 of item 1: after the first step a = 0, b = 2 / (1 + kc), p = 1 + kc.
-template <std::size_t N>
-void set_vector(CelLoop<N>& c, std::size_t i, double kc) {
-    c.p[i] = 1.0 + kc;
-    c.a[i] = 0.0;
-    c.b[i] = 2.0 / (1.0 + kc);
-}
-
-// The two end terms at axial distance zeta >= 0 from one end of the unit sheet:
-//   axial  = G (the sheet's own field) for r <= 1, W = Omega / (4 pi) for r > 1;
-//   vector = A, with Br = A(lo) - A(hi).
-struct EndTerms {
-    double axial = 0.0, vector = 0.0;
-};
-
-EndTerms end_terms(double zeta, double r, double one_minus_r, bool want_axial, bool want_vector,
-                   double min_split_k2) {
-    want_vector = want_vector && r > 0.0;
-    if (zeta == 0.0) want_axial = false;  // G(0) = 0, and W(0) = 0 outside the radius
-    EndTerms out;
-    if (!want_axial && !want_vector) return out;
-    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
-    const double kc = e.kc;
-    const double prefactor = e.zeta_over_beta * kInvPi / (1.0 + r);
-    const double vector_scale = e.k2 * kInvPi / e.beta;
-
-    if (want_axial && one_minus_r > 0.0) {
-        // G = prefactor * cel(kc, g^2, 1, g), g = gamma > 0, first Gauss step by hand from
-        // p = g, a = 1, b / p = 1: every term stays positive.
-        const double g = one_minus_r / (1.0 + r);
-        auto c = CelLoop<2>::after_first_step(kc);
-        c.p[0] = g + kc / g;
-        c.a[0] = 1.0 + 1.0 / g;
-        c.b[0] = 2.0 * (1.0 + kc / g);
-        set_vector(c, 1, kc);
-        const auto v = c.finish();
-        out.axial = prefactor * v[0];
-        if (want_vector) out.vector = vector_scale * v[1];
-        return out;
-    }
-    if (want_axial && one_minus_r == 0.0) {
-        // r = 1: the limit gamma -> 0+ of the Derby-Olbert form, G = 1/4 + kc K(kc) / (2 pi);
-        // K = cel(kc, 1, 1, 1) after its first step shares p = 1 + kc with A.
-        auto c = CelLoop<2>::after_first_step(kc);
-        c.p[0] = 1.0 + kc;
-        c.a[0] = 2.0;
-        c.b[0] = 2.0 * (1.0 + kc);
-        set_vector(c, 1, kc);
-        const auto v = c.finish();
-        out.axial = 0.25 + kc * v[0] * (0.5 * kInvPi);
-        if (want_vector) out.vector = vector_scale * v[1];
-        return out;
-    }
-    if (want_axial && e.k2 >= min_split_k2) {
-        // W for r > 1 by the split form of item 2: X and Y share p = g + kc / g.
-        const double g = -one_minus_r / (1.0 + r);  // -gamma > 0
-        const double delta = 2.0 / (1.0 + r);       // 1 - g, exact
-        const double kc_minus_g = ((4.0 * r / (1.0 + r)) * (e.zeta_over_beta * e.zeta_over_beta) / (1.0 + r)) / (kc + g);
-        auto c = CelLoop<3>::after_first_step(kc);
-        c.p[0] = c.p[1] = g + kc / g;
-        c.a[0] = 1.0;
-        c.b[1] = 1.0;
-        set_vector(c, 2, kc);
-        const auto v = c.finish();
-        out.axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
-        if (want_vector) out.vector = vector_scale * v[2];
-        return out;
-    }
-    if (want_axial) out.axial = disk_part_by_sum(zeta, r);  // r > 1, far along the axis direction
-    if (want_vector) {
-        auto c = CelLoop<1>::after_first_step(kc);
-        set_vector(c, 0, kc);
-        out.vector = vector_scale * c.finish()[0];
-    }
-    return out;
-}
 
 // W for r <= 1 given G there.
 double disk_from_inside(double zeta, double r, double inside) {
@@ -242,70 +98,139 @@ FieldRZ integrate_loop(double centre, double half_width, double r, double one_mi
 
 }  // namespace
 
-FieldRZ sheet_field_normalized(const SheetPoint& p, double max_loss, Components want) {
-    const double sign = p.z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
-    const double z = std::fabs(p.z), r = p.r, one_minus_r = p.one_minus_r, h = p.h;
+namespace {
+
+// What one sheet needs before and after its end terms: the decisions of sheet_field_normalized
+// that do not depend on them, kept so that many sheets can share one call for the end terms.
+struct SheetPlan {
+    double sign, z, r, one_minus_r, h;
+    bool between, inside_radius, want_bz, want_br;
+    double br_centre, br_half;
+    bool bz_quadrature, br_quadrature, closed_bz, closed_br;
+    double zeta_near, zeta_far;
+    std::complex<double> pole;
+};
+
+SheetPlan plan_sheet(const SheetPoint& p, double max_loss, Components want) {
+    SheetPlan s{};
+    s.sign = p.z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
+    s.z = std::fabs(p.z);
+    s.r = p.r;
+    s.one_minus_r = p.one_minus_r;
+    s.h = p.h;
     const double beyond = p.beyond_end;  // |z| - h, exact
-    if (one_minus_r == 0.0 && beyond <= 0.0) raise_singular_point("the point lies on the current sheet");
-    const std::complex<double> pole{0.0, std::fabs(one_minus_r)};
-    const bool inside_radius = one_minus_r >= 0.0;
-    const double min_split_k2 = std::min(kSplitMinK2, 10.0 / max_loss);
+    if (s.one_minus_r == 0.0 && beyond <= 0.0) raise_singular_point("the point lies on the current sheet");
+    s.pole = {0.0, std::fabs(s.one_minus_r)};
+    s.inside_radius = s.one_minus_r >= 0.0;
 
     // Bz integrates Bz_loop over u in [z - h, z + h]; Br the odd Br_loop, of which only
     // [|z - h|, z + h] survives. Both use the end terms at zeta = |z - h| and z + h. The
     // cancellation between them grows like centre / (2 half-width) of those intervals (away
     // from a zero of the field): far beyond that the closed form is not even tried.
-    const bool between = beyond < 0.0;
-    const bool want_bz = want != Components::Radial, want_br = want != Components::Axial && z > 0.0 && r > 0.0;
-    const double br_centre = between ? h : z, br_half = between ? z : h;
+    s.between = beyond < 0.0;
+    s.want_bz = want != Components::Radial;
+    s.want_br = want != Components::Axial && s.z > 0.0 && s.r > 0.0;
+    s.br_centre = s.between ? s.h : s.z;
+    s.br_half = s.between ? s.z : s.h;
     const double direct_ratio = 1.0 / (kDirectQuadratureLoss * max_loss);
-    bool bz_quadrature = want_bz && !between && h < direct_ratio * z;
-    bool br_quadrature = want_br && br_half < direct_ratio * br_centre;
-    const auto quadrature_pays = [&](double centre, double half) {
-        return bernstein_rho(centre, half, pole) > kMinQuadratureRho;
-    };
+    s.bz_quadrature = s.want_bz && !s.between && s.h < direct_ratio * s.z;
+    s.br_quadrature = s.want_br && s.br_half < direct_ratio * s.br_centre;
+    s.closed_bz = s.want_bz && !s.bz_quadrature;
+    s.closed_br = s.want_br && !s.br_quadrature;
+    s.zeta_near = std::fabs(beyond);
+    s.zeta_far = s.z + s.h;
+    return s;
+}
 
+bool needs_end_terms(const SheetPlan& s) { return s.closed_bz || s.closed_br; }
+
+EndTermRequest near_request(const SheetPlan& s) {
+    return {s.zeta_near, s.r, s.one_minus_r, s.closed_bz, s.closed_br};
+}
+EndTermRequest far_request(const SheetPlan& s) { return {s.zeta_far, s.r, s.one_minus_r, s.closed_bz, s.closed_br}; }
+
+double min_split_k2_for(double max_loss) { return std::min(kSplitMinK2, 10.0 / max_loss); }
+
+FieldRZ finish_sheet(SheetPlan s, const EndTerms& near, const EndTerms& far, double max_loss) {
+    const auto quadrature_pays = [&](double centre, double half) {
+        return bernstein_rho(centre, half, s.pole) > kMinQuadratureRho;
+    };
     double bz = 0.0, br = 0.0;
-    const bool closed_bz = want_bz && !bz_quadrature, closed_br = want_br && !br_quadrature;
-    if (closed_bz || closed_br) {
-        const double zeta_near = std::fabs(beyond), zeta_far = z + h;
-        const EndTerms near = end_terms(zeta_near, r, one_minus_r, closed_bz, closed_br, min_split_k2);
-        const EndTerms far = end_terms(zeta_far, r, one_minus_r, closed_bz, closed_br, min_split_k2);
-        if (closed_bz) {
-            if (between) {
-                // Between the end planes: two terms of one sign, nothing cancels.
-                bz = inside_radius ? near.axial + far.axial : -(near.axial + far.axial);
+    if (s.closed_bz) {
+        if (s.between) {
+            // Between the end planes: two terms of one sign, nothing cancels.
+            bz = s.inside_radius ? near.axial + far.axial : -(near.axial + far.axial);
+        } else {
+            // Beyond an end: the difference of the end terms, in whichever form is smaller.
+            Difference d{};
+            if (!s.inside_radius) {
+                d = difference(near.axial, far.axial);
+            } else if (far.axial <= 0.5 - near.axial) {
+                d = difference(far.axial, near.axial);
             } else {
-                // Beyond an end: the difference of the end terms, in whichever form is smaller.
-                Difference d{};
-                if (!inside_radius) {
-                    d = difference(near.axial, far.axial);
-                } else if (far.axial <= 0.5 - near.axial) {
-                    d = difference(far.axial, near.axial);
-                } else {
-                    d = difference(disk_from_inside(zeta_near, r, near.axial), disk_from_inside(zeta_far, r, far.axial));
-                }
-                bz = d.value;
-                bz_quadrature = d.loss > max_loss && quadrature_pays(z, h);
+                d = difference(disk_from_inside(s.zeta_near, s.r, near.axial), disk_from_inside(s.zeta_far, s.r, far.axial));
             }
+            bz = d.value;
+            s.bz_quadrature = d.loss > max_loss && quadrature_pays(s.z, s.h);
         }
-        if (closed_br) {
-            const Difference d = difference(near.vector, far.vector);
-            br = d.value;
-            br_quadrature = d.loss > max_loss && quadrature_pays(br_centre, br_half);
-        }
+    }
+    if (s.closed_br) {
+        const Difference d = difference(near.vector, far.vector);
+        br = d.value;
+        s.br_quadrature = d.loss > max_loss && quadrature_pays(s.br_centre, s.br_half);
     }
     // Where the ends cancel, the loop field integrated along the sheet instead.
-    if (want_bz && bz_quadrature) {
-        const FieldRZ whole = integrate_loop(z, h, r, one_minus_r);
+    if (s.want_bz && s.bz_quadrature) {
+        const FieldRZ whole = integrate_loop(s.z, s.h, s.r, s.one_minus_r);
         bz = whole.bz;
-        if (want_br && br_quadrature && !between) {
+        if (s.want_br && s.br_quadrature && !s.between) {
             br = whole.br;
-            br_quadrature = false;
+            s.br_quadrature = false;
         }
     }
-    if (want_br && br_quadrature) br = integrate_loop(br_centre, br_half, r, one_minus_r).br;
-    return {bz, sign * br};
+    if (s.want_br && s.br_quadrature) br = integrate_loop(s.br_centre, s.br_half, s.r, s.one_minus_r).br;
+    return {bz, s.sign * br};
+}
+
+}  // namespace
+
+FieldRZ sheet_field_normalized(const SheetPoint& p, double max_loss, Components want) {
+    const SheetPlan s = plan_sheet(p, max_loss, want);
+    EndTerms near, far;
+    if (needs_end_terms(s)) {
+        const double min_split_k2 = min_split_k2_for(max_loss);
+        near = end_terms(near_request(s), min_split_k2);
+        far = end_terms(far_request(s), min_split_k2);
+    }
+    return finish_sheet(s, near, far, max_loss);
+}
+
+void sheet_fields_normalized(const SheetPoint* p, int count, double max_loss, Components want, FieldRZ* out) {
+    // Near terms first, then far ones: neighbours in the request list have similar moduli, so a
+    // pack's lanes take similar numbers of Gauss steps.
+    SheetPlan plans[kMaxSheetBatch];
+    EndTermRequest requests[2 * kMaxSheetBatch];
+    EndTerms terms[2 * kMaxSheetBatch];
+    for (int first = 0; first < count; first += kMaxSheetBatch) {
+        const int n = std::min(kMaxSheetBatch, count - first);
+        int asked = 0;
+        int slot[kMaxSheetBatch];
+        for (int i = 0; i < n; ++i) {
+            plans[i] = plan_sheet(p[first + i], max_loss, want);
+            slot[i] = needs_end_terms(plans[i]) ? asked++ : -1;
+        }
+        for (int i = 0; i < n; ++i)
+            if (slot[i] >= 0) {
+                requests[slot[i]] = near_request(plans[i]);
+                requests[asked + slot[i]] = far_request(plans[i]);
+            }
+        end_terms(requests, 2 * asked, min_split_k2_for(max_loss), terms);
+        for (int i = 0; i < n; ++i) {
+            const EndTerms none{};
+            const bool has = slot[i] >= 0;
+            out[first + i] = finish_sheet(plans[i], has ? terms[slot[i]] : none, has ? terms[asked + slot[i]] : none, max_loss);
+        }
+    }
 }
 
 }  // namespace internal

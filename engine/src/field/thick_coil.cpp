@@ -65,11 +65,15 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
         // Far out on the axis the two ends cancel: integrate the sheets instead (below).
     }
     const double beyond = z - h;  // exact where it matters (z close to h)
-    const auto sheet = [&](double a, double a_minus_r) {
-        return sheet_field_normalized(SheetPoint{z / a, r / a, a_minus_r / a, h / a, beyond / a}, kSheetMaxLoss, want);
+    // The sheets of one quadrature segment in one call (their end terms run in packs).
+    const auto sheets = [&](const double* a, const double* a_minus_r, int n, FieldRZ* out) {
+        SheetPoint points[kMaxGaussNodes];
+        for (int i = 0; i < n; ++i)
+            points[i] = SheetPoint{z / a[i], r / a[i], a_minus_r[i] / a[i], h / a[i], beyond / a[i]};
+        sheet_fields_normalized(points, n, kSheetMaxLoss, want, out);
     };
     const RadialSingularities sing{r, {std::fabs(z - h), z + h}, 2};
-    const FieldRZ f = integrate_over_radius(sheet, a1, a2, sing);
+    const FieldRZ f = integrate_over_radius(sheets, a1, a2, sing);
     return {f.bz, sign * f.br};
 }
 

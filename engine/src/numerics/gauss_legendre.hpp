@@ -76,4 +76,39 @@ auto gauss_legendre(F&& f, double centre, double half_width, int points) {
     return apply_gauss_rule<30>(f, centre, half_width);
 }
 
+// The nodes and weights that gauss_legendre(f, centre, half_width, points) uses, in the order it
+// adds them: the integral is half_width * sum of w[i] f(x[i]). For kernels that take many nodes
+// in one call. Returns the count (at most kMaxGaussNodes).
+inline constexpr int kMaxGaussNodes = 30;
+
+template <unsigned N>
+int list_gauss_rule(double centre, double half_width, double* x, double* w) {
+    using Rule = boost::math::quadrature::gauss<double, N>;
+    const auto& abscissa = Rule::abscissa();
+    const auto& weights = Rule::weights();
+    int n = 0;
+    std::size_t i = 0;
+    if constexpr (N % 2 == 1) {
+        x[n] = centre;
+        w[n++] = weights[0];
+        i = 1;
+    }
+    for (; i < abscissa.size(); ++i) {
+        x[n] = centre + half_width * abscissa[i];
+        w[n++] = weights[i];
+        x[n] = centre - half_width * abscissa[i];
+        w[n++] = weights[i];
+    }
+    return n;
+}
+
+inline int gauss_legendre_nodes(double centre, double half_width, int points, double* x, double* w) {
+    if (points <= 7) return list_gauss_rule<7>(centre, half_width, x, w);
+    if (points <= 10) return list_gauss_rule<10>(centre, half_width, x, w);
+    if (points <= 15) return list_gauss_rule<15>(centre, half_width, x, w);
+    if (points <= 20) return list_gauss_rule<20>(centre, half_width, x, w);
+    if (points <= 25) return list_gauss_rule<25>(centre, half_width, x, w);
+    return list_gauss_rule<30>(centre, half_width, x, w);
+}
+
 }  // namespace coilwright::internal

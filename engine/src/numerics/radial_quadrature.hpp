@@ -18,6 +18,7 @@
 #include <cmath>
 #include <complex>
 #include <cstddef>
+#include <type_traits>
 
 #include "coilwright/constants.hpp"
 #include "coilwright/field/field_rz.hpp"
@@ -54,11 +55,30 @@ FieldRZ integrate_segment(const Kernel& kernel, const Map& at, double t0, double
         sum += integrate_segment(kernel, at, centre, t1, poles, n_poles, opt, depth + 1);
         return sum;
     }
-    const auto mapped = [&](double t) {
-        const auto [a, a_minus_r, jacobian] = at(t);
-        return jacobian * kernel(a, a_minus_r);
-    };
-    return gauss_legendre(mapped, centre, half, gauss_points_for(rho, opt.exponent));
+    const int points = gauss_points_for(rho, opt.exponent);
+    if constexpr (std::is_invocable_v<const Kernel&, const double*, const double*, int, FieldRZ*>) {
+        // A kernel for many radii at once: all nodes of the segment in one call, added in the
+        // order and with the operations of gauss_legendre (the same bits as node by node).
+        double t[kMaxGaussNodes], w[kMaxGaussNodes], a[kMaxGaussNodes], a_minus_r[kMaxGaussNodes], jacobian[kMaxGaussNodes];
+        FieldRZ value[kMaxGaussNodes];
+        const int n = gauss_legendre_nodes(centre, half, points, t, w);
+        for (int i = 0; i < n; ++i) {
+            const auto node = at(t[i]);
+            a[i] = node.a;
+            a_minus_r[i] = node.a_minus_r;
+            jacobian[i] = node.jacobian;
+        }
+        kernel(a, a_minus_r, n, value);
+        FieldRZ sum{};
+        for (int i = 0; i < n; ++i) sum += w[i] * (jacobian[i] * value[i]);
+        return half * sum;
+    } else {
+        const auto mapped = [&](double t) {
+            const auto [a, a_minus_r, jacobian] = at(t);
+            return jacobian * kernel(a, a_minus_r);
+        };
+        return gauss_legendre(mapped, centre, half, points);
+    }
 }
 
 struct Node {
@@ -67,7 +87,8 @@ struct Node {
 
 }  // namespace radial_detail
 
-// Integral over a in [a1, a2] (0 < a1 < a2) of kernel(a, a - r) -> FieldRZ.
+// Integral over a in [a1, a2] (0 < a1 < a2) of kernel(a, a - r) -> FieldRZ, or of a kernel that
+// takes n radii at once: kernel(const double* a, const double* a_minus_r, int n, FieldRZ* out).
 template <class Kernel>
 FieldRZ integrate_over_radius(const Kernel& kernel, double a1, double a2, const RadialSingularities& sing,
                               const RadialQuadratureOptions& opt = {}) {

@@ -1,0 +1,330 @@
+// End terms of the thin-sheet field (items 1 to 3 of solenoid.cpp), one at a time or in packs.
+#include "field/sheet_end_terms.hpp"
+
+#include <algorithm>
+#include <array>
+#include <cmath>
+
+#include "coilwright/constants.hpp"
+#include "numerics/bulirsch_cel.hpp"
+#include "numerics/cpu_features.hpp"
+#include "numerics/lanes.hpp"
+#include "numerics/policy.hpp"
+
+namespace coilwright::internal {
+
+namespace {
+
+// The trapezoidal sum uses N >= this / strip width points (error ~ exp(-N width)).
+constexpr double kTrapezoidExponent = 40.0;
+constexpr double kInvPi = 1.0 / kPi;
+// norm2 takes the plain square root between these magnitudes (hypot outside them).
+constexpr double kPlainNormMin = 1e-150, kPlainNormMax = 1e150;
+
+// sqrt(x^2 + y^2) without the cost of glibc's hypot (a third of the kernel's time); hypot only
+// where the squares could overflow or underflow.
+inline double norm2(double x, double y) {
+    const double m = std::max(std::fabs(x), std::fabs(y));
+    if (m < kPlainNormMax && m > kPlainNormMin) return std::sqrt(x * x + y * y);
+    return std::hypot(x, y);
+}
+
+template <int N>
+const std::array<double, N / 2 + 1>& half_period_cosines() {
+    static const std::array<double, N / 2 + 1> table = [] {
+        std::array<double, N / 2 + 1> t{};
+        for (int j = 0; j <= N / 2; ++j) t[static_cast<std::size_t>(j)] = std::cos(2.0 * kPi * j / N);
+        return t;
+    }();
+    return table;
+}
+
+// Trapezoidal sum of item 3 with N points per period (even integrand: half a period), all
+// lengths scaled by 1 / s (= t) so that nothing overflows for far points.
+template <int N>
+double solid_angle_sum(double zeta_over_s, double r_over_s, double t) {
+    const auto& cosines = half_period_cosines<N>();
+    double sum = 0.0;
+    for (int j = 0; j <= N / 2; ++j) {
+        const double rc = r_over_s * (cosines[static_cast<std::size_t>(j)] * t);
+        const double rr = std::sqrt(t * t + 1.0 - 2.0 * rc);  // R / s
+        const double f = 1.0 / (rr * (rr + 1.0 - rc));
+        sum += (j == 0 || j == N / 2) ? f : 2.0 * f;
+    }
+    return zeta_over_s * (t * t) * sum / (2.0 * N);
+}
+
+struct EndGeometry {
+    double beta, kc, zeta_over_beta, k2;
+};
+
+EndGeometry end_geometry(double zeta, double r, double one_minus_r) {
+    const double alpha = norm2(one_minus_r, zeta);
+    const double beta = norm2(1.0 + r, zeta);
+    if (alpha == 0.0) raise_singular_point("the point lies on the rim of the current sheet");
+    return {beta, alpha / beta, zeta / beta, (4.0 * r / beta) / beta};
+}
+
+// -cel(kc, 1, 1, -1) / k^2 of item 1: after the first step a = 0, b = 2 / (1 + kc), p = 1 + kc.
+template <std::size_t N>
+void set_vector(CelLoop<N>& c, std::size_t i, double kc) {
+    c.p[i] = 1.0 + kc;
+    c.a[i] = 0.0;
+    c.b[i] = 2.0 / (1.0 + kc);
+}
+
+EndTerms one_end(double zeta, double r, double one_minus_r, bool want_axial, bool want_vector, double min_split_k2) {
+    want_vector = want_vector && r > 0.0;
+    if (zeta == 0.0) want_axial = false;  // G(0) = 0, and W(0) = 0 outside the radius
+    EndTerms out;
+    if (!want_axial && !want_vector) return out;
+    const EndGeometry e = end_geometry(zeta, r, one_minus_r);
+    const double kc = e.kc;
+    const double prefactor = e.zeta_over_beta * kInvPi / (1.0 + r);
+    const double vector_scale = e.k2 * kInvPi / e.beta;
+
+    if (want_axial && one_minus_r > 0.0) {
+        // G = prefactor * cel(kc, g^2, 1, g), g = gamma > 0, first Gauss step by hand from
+        // p = g, a = 1, b / p = 1: every term stays positive.
+        const double g = one_minus_r / (1.0 + r);
+        auto c = CelLoop<2>::after_first_step(kc);
+        c.p[0] = g + kc / g;
+        c.a[0] = 1.0 + 1.0 / g;
+        c.b[0] = 2.0 * (1.0 + kc / g);
+        set_vector(c, 1, kc);
+        const auto v = c.finish();
+        out.axial = prefactor * v[0];
+        if (want_vector) out.vector = vector_scale * v[1];
+        return out;
+    }
+    if (want_axial && one_minus_r == 0.0) {
+        // r = 1: the limit gamma -> 0+ of the Derby-Olbert form, G = 1/4 + kc K(kc) / (2 pi);
+        // K = cel(kc, 1, 1, 1) after its first step shares p = 1 + kc with A.
+        auto c = CelLoop<2>::after_first_step(kc);
+        c.p[0] = 1.0 + kc;
+        c.a[0] = 2.0;
+        c.b[0] = 2.0 * (1.0 + kc);
+        set_vector(c, 1, kc);
+        const auto v = c.finish();
+        out.axial = 0.25 + kc * v[0] * (0.5 * kInvPi);
+        if (want_vector) out.vector = vector_scale * v[1];
+        return out;
+    }
+    if (want_axial && e.k2 >= min_split_k2) {
+        // W for r > 1 by the split form of item 2: X and Y share p = g + kc / g.
+        const double g = -one_minus_r / (1.0 + r);  // -gamma > 0
+        const double delta = 2.0 / (1.0 + r);       // 1 - g, exact
+        const double kc_minus_g = ((4.0 * r / (1.0 + r)) * (e.zeta_over_beta * e.zeta_over_beta) / (1.0 + r)) / (kc + g);
+        auto c = CelLoop<3>::after_first_step(kc);
+        c.p[0] = c.p[1] = g + kc / g;
+        c.a[0] = 1.0;
+        c.b[1] = 1.0;
+        set_vector(c, 2, kc);
+        const auto v = c.finish();
+        out.axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
+        if (want_vector) out.vector = vector_scale * v[2];
+        return out;
+    }
+    if (want_axial) out.axial = disk_part_by_sum(zeta, r);  // r > 1, far along the axis direction
+    if (want_vector) {
+        auto c = CelLoop<1>::after_first_step(kc);
+        set_vector(c, 0, kc);
+        out.vector = vector_scale * c.finish()[0];
+    }
+    return out;
+}
+
+void end_terms_one_by_one(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
+    for (int i = 0; i < count; ++i) out[i] = end_terms(q[i], min_split_k2);
+}
+
+#if defined(COILWRIGHT_HAVE_AVX2_FMA_CODE) && defined(COILWRIGHT_VECTOR_LANES)
+#define COILWRIGHT_END_TERM_PACKS 1
+
+// The forms one_end takes, as far as packs run them: the cel iteration with two integrands
+// (G and A, inside the radius), three (X, Y and A, outside it) or one (A alone).
+enum class EndForm { Nothing, Inside, Outside, VectorOnly, Scalar };
+
+EndForm end_form_of(const EndTermRequest& q) {
+    const bool want_vector = q.want_vector && q.r > 0.0, want_axial = q.want_axial && q.zeta != 0.0;
+    if (!want_axial && !want_vector) return EndForm::Nothing;
+    // Packs take the plain square roots of norm2 only.
+    const double m_alpha = std::max(std::fabs(q.one_minus_r), q.zeta), m_beta = std::max(1.0 + q.r, q.zeta);
+    if (!(m_alpha > kPlainNormMin && m_alpha < kPlainNormMax && m_beta > kPlainNormMin && m_beta < kPlainNormMax))
+        return EndForm::Scalar;
+    if (!want_axial) return EndForm::VectorOnly;
+    if (q.one_minus_r > 0.0) return EndForm::Inside;
+    if (q.one_minus_r < 0.0) return EndForm::Outside;  // if every lane has k^2 >= min_split_k2
+    return EndForm::Scalar;                             // r = 1
+}
+
+// CelLoop<N>::finish on a pack: lanes that have converged keep their state while the others
+// step, so each lane ends with the bits of the scalar loop.
+template <int N>
+struct CelPack {
+    Pack qc, em, g, e;
+    Pack p[N], a[N], b[N];
+
+    COILWRIGHT_LANE_INLINE static CelPack after_first_step(Pack kc) {
+        CelPack s{};
+        s.qc = kc;
+        s.em = 1.0 + kc;
+        s.g = PackLanes::splat(1.0);
+        s.e = kc;
+        return s;
+    }
+
+    COILWRIGHT_LANE_INLINE void set_vector(int i, Pack kc) {
+        p[i] = 1.0 + kc;
+        a[i] = Pack{};
+        b[i] = 2.0 / (1.0 + kc);
+    }
+
+    COILWRIGHT_LANE_INLINE void finish(Pack out[N]) {
+        const Pack zero{};
+        if (!PackLanes::all(qc > zero)) raise_singular_point("the point is too close to a current filament to be represented");
+        PackMask active = pack_abs(g - qc) > g * kCelTolerance;
+        for (StepBudget budget(kCelMaxSteps, "the elliptic integral (Bulirsch's cel)"); PackLanes::any(active);
+             budget.step()) {
+            const Pack qc_next = 2.0 * PackLanes::sqrt(e);
+            const Pack e_next = qc_next * em;
+            for (int i = 0; i < N; ++i) {
+                const Pack inv_p = 1.0 / p[i];
+                const Pack ge = e_next * inv_p;
+                const Pack f = a[i];
+                a[i] = pack_select(active, a[i] + b[i] * inv_p, a[i]);
+                b[i] = pack_select(active, 2.0 * (b[i] + f * ge), b[i]);
+                p[i] = pack_select(active, p[i] + ge, p[i]);
+            }
+            qc = pack_select(active, qc_next, qc);
+            e = pack_select(active, e_next, e);
+            g = pack_select(active, em, g);
+            em = pack_select(active, em + qc_next, em);
+            active = pack_abs(g - qc) > g * kCelTolerance;
+        }
+        for (int i = 0; i < N; ++i) out[i] = kHalfPi * (b[i] + a[i] * em) / (em * (em + p[i]));
+    }
+};
+
+// Four requests of one form (lanes past `count` repeat the first); false where the outside
+// form does not apply to every lane (the caller then takes them one at a time).
+COILWRIGHT_LANE_INLINE bool four_of_a_form(const EndTermRequest* q, int count, EndForm form, double min_split_k2,
+                                           EndTerms* out) {
+    Pack zeta{}, r{}, omr{};
+    for (int j = 0; j < kPackWidth; ++j) {
+        const EndTermRequest& l = q[j < count ? j : 0];
+        zeta[j] = l.zeta;
+        r[j] = l.r;
+        omr[j] = l.one_minus_r;
+    }
+    const Pack one_plus_r = 1.0 + r;
+    const Pack alpha = PackLanes::sqrt(omr * omr + zeta * zeta);
+    const Pack beta = PackLanes::sqrt(one_plus_r * one_plus_r + zeta * zeta);
+    const Pack kc = alpha / beta, zeta_over_beta = zeta / beta, k2 = (4.0 * r / beta) / beta;
+    const Pack prefactor = zeta_over_beta * kInvPi / one_plus_r;
+    const Pack vector_scale = k2 * kInvPi / beta;
+    Pack axial{}, vector{};
+    if (form == EndForm::Inside) {
+        const Pack g = omr / one_plus_r;
+        auto c = CelPack<2>::after_first_step(kc);
+        c.p[0] = g + kc / g;
+        c.a[0] = 1.0 + 1.0 / g;
+        c.b[0] = 2.0 * (1.0 + kc / g);
+        c.set_vector(1, kc);
+        Pack v[2];
+        c.finish(v);
+        axial = prefactor * v[0];
+        vector = vector_scale * v[1];
+    } else if (form == EndForm::Outside) {
+        if (!PackLanes::all(k2 >= min_split_k2)) return false;
+        const Pack g = -omr / one_plus_r;
+        const Pack delta = 2.0 / one_plus_r;
+        const Pack kc_minus_g = ((4.0 * r / one_plus_r) * (zeta_over_beta * zeta_over_beta) / one_plus_r) / (kc + g);
+        auto c = CelPack<3>::after_first_step(kc);
+        c.p[0] = c.p[1] = g + kc / g;
+        c.a[0] = PackLanes::splat(1.0);
+        c.b[1] = PackLanes::splat(1.0);
+        c.set_vector(2, kc);
+        Pack v[3];
+        c.finish(v);
+        axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
+        vector = vector_scale * v[2];
+    } else {
+        auto c = CelPack<1>::after_first_step(kc);
+        c.set_vector(0, kc);
+        Pack v[1];
+        c.finish(v);
+        vector = vector_scale * v[0];
+    }
+    for (int j = 0; j < count && j < kPackWidth; ++j) {
+        out[j] = EndTerms{};
+        if (form != EndForm::VectorOnly) out[j].axial = axial[j];
+        if (q[j].want_vector && q[j].r > 0.0) out[j].vector = vector[j];
+    }
+    return true;
+}
+
+COILWRIGHT_LANE_INLINE void end_term_packs(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
+    for (int first = 0; first < count;) {
+        const int left = std::min(kPackWidth, count - first);
+        const EndForm form = end_form_of(q[first]);
+        int same = 1;
+        while (same < left && end_form_of(q[first + same]) == form) ++same;
+        const bool packable = form == EndForm::Inside || form == EndForm::Outside || form == EndForm::VectorOnly;
+        // A pack pays from two lanes on; a short run of one form leaves the rest for the next pack.
+        if (packable && same >= 2 && four_of_a_form(q + first, same, form, min_split_k2, out + first)) {
+            first += same;
+            continue;
+        }
+        out[first] = end_terms(q[first], min_split_k2);
+        ++first;
+    }
+}
+
+[[gnu::target("avx2"), gnu::flatten]] void end_terms_in_packs(const EndTermRequest* q, int count, double min_split_k2,
+                                                    EndTerms* out) {
+    end_term_packs(q, count, min_split_k2, out);
+}
+#endif
+
+}  // namespace
+
+EndTerms end_terms(const EndTermRequest& q, double min_split_k2) {
+    return one_end(q.zeta, q.r, q.one_minus_r, q.want_axial, q.want_vector, min_split_k2);
+}
+
+void end_terms_using(EndTermCode code, const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
+#ifdef COILWRIGHT_END_TERM_PACKS
+    static const bool packs = processor_has_avx2_fma();
+    if (code == EndTermCode::Packs && packs) return end_terms_in_packs(q, count, min_split_k2, out);
+#endif
+    (void)code;
+    end_terms_one_by_one(q, count, min_split_k2, out);
+}
+
+void end_terms(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
+    end_terms_using(EndTermCode::Packs, q, count, min_split_k2, out);
+}
+
+// W = Omega / (4 pi) by the direct sum; needs r^2 + zeta^2 > r (true wherever it is used).
+double disk_part_by_sum(double zeta, double r) {
+    if (r == 0.0) {
+        const double R = norm2(1.0, zeta);
+        return 0.5 / (R * (R + zeta));  // on the axis: (1 - zeta / R) / 2 without cancellation
+    }
+    const double s = norm2(r, zeta);
+    const double t = 1.0 / s;
+    const double strip = std::acosh(0.5 * (s / r) * (s + t));  // acosh((1 + s^2) / (2 r))
+    const double needed = kTrapezoidExponent / strip;
+    const double zs = zeta * t, rs = r * t;
+    if (needed <= 4) return solid_angle_sum<4>(zs, rs, t);
+    if (needed <= 8) return solid_angle_sum<8>(zs, rs, t);
+    if (needed <= 12) return solid_angle_sum<12>(zs, rs, t);
+    if (needed <= 16) return solid_angle_sum<16>(zs, rs, t);
+    if (needed <= 24) return solid_angle_sum<24>(zs, rs, t);
+    if (needed <= 32) return solid_angle_sum<32>(zs, rs, t);
+    if (needed <= 48) return solid_angle_sum<48>(zs, rs, t);
+    return solid_angle_sum<64>(zs, rs, t);  // not reached for the k^2 and G limits above
+}
+
+}  // namespace coilwright::internal
