@@ -159,19 +159,20 @@ EndForm end_form_of(const EndTermRequest& q) {
 }
 
 // CelLoop<N>::finish on a pack: lanes that have converged keep their state while the others
-// step, so each lane ends with the bits of the scalar loop.
-template <int N>
+// step, so each lane ends with the bits of the scalar loop. With kSharedP the first two
+// integrands start with one p (X and Y of the outside form), which then stays equal: one division
+// serves both, as it gives the same bits as two.
+template <int N, bool kSharedP = false>
 struct CelPack {
     Pack qc, em, g, e;
     Pack p[N], a[N], b[N];
+    PackMask active;
 
-    COILWRIGHT_LANE_INLINE static CelPack after_first_step(Pack kc) {
-        CelPack s{};
-        s.qc = kc;
-        s.em = 1.0 + kc;
-        s.g = PackLanes::splat(1.0);
-        s.e = kc;
-        return s;
+    COILWRIGHT_LANE_INLINE void after_first_step(Pack kc) {
+        qc = kc;
+        em = 1.0 + kc;
+        g = PackLanes::splat(1.0);
+        e = kc;
     }
 
     COILWRIGHT_LANE_INLINE void set_vector(int i, Pack kc) {
@@ -180,100 +181,156 @@ struct CelPack {
         b[i] = 2.0 / (1.0 + kc);
     }
 
-    COILWRIGHT_LANE_INLINE void finish(Pack out[N]) {
-        const Pack zero{};
-        if (!PackLanes::all(qc > zero)) raise_singular_point("the point is too close to a current filament to be represented");
-        PackMask active = pack_abs(g - qc) > g * kCelTolerance;
-        for (StepBudget budget(kCelMaxSteps, "the elliptic integral (Bulirsch's cel)"); PackLanes::any(active);
-             budget.step()) {
-            const Pack qc_next = 2.0 * PackLanes::sqrt(e);
-            const Pack e_next = qc_next * em;
-            for (int i = 0; i < N; ++i) {
-                const Pack inv_p = 1.0 / p[i];
-                const Pack ge = e_next * inv_p;
-                const Pack f = a[i];
-                a[i] = pack_select(active, a[i] + b[i] * inv_p, a[i]);
-                b[i] = pack_select(active, 2.0 * (b[i] + f * ge), b[i]);
-                p[i] = pack_select(active, p[i] + ge, p[i]);
-            }
-            qc = pack_select(active, qc_next, qc);
-            e = pack_select(active, e_next, e);
-            g = pack_select(active, em, g);
-            em = pack_select(active, em + qc_next, em);
-            active = pack_abs(g - qc) > g * kCelTolerance;
+    COILWRIGHT_LANE_INLINE void begin() {
+        if (!PackLanes::all(qc > Pack{})) raise_singular_point("the point is too close to a current filament to be represented");
+        active = pack_abs(g - qc) > g * kCelTolerance;
+    }
+    COILWRIGHT_LANE_INLINE bool running() const { return PackLanes::any(active); }
+
+    COILWRIGHT_LANE_INLINE void step() {
+        const Pack qc_next = 2.0 * PackLanes::sqrt(e);
+        const Pack e_next = qc_next * em;
+        Pack inv_p_shared{};
+        for (int i = 0; i < N; ++i) {
+            if (!(kSharedP && i == 1)) inv_p_shared = 1.0 / p[i];
+            const Pack inv_p = inv_p_shared;
+            const Pack ge = e_next * inv_p;
+            const Pack f = a[i];
+            a[i] = pack_select(active, a[i] + b[i] * inv_p, a[i]);
+            b[i] = pack_select(active, 2.0 * (b[i] + f * ge), b[i]);
+            p[i] = pack_select(active, p[i] + ge, p[i]);
         }
+        qc = pack_select(active, qc_next, qc);
+        e = pack_select(active, e_next, e);
+        g = pack_select(active, em, g);
+        em = pack_select(active, em + qc_next, em);
+        active = pack_abs(g - qc) > g * kCelTolerance;
+    }
+
+    COILWRIGHT_LANE_INLINE void results(Pack out[N]) const {
         for (int i = 0; i < N; ++i) out[i] = kHalfPi * (b[i] + a[i] * em) / (em * (em + p[i]));
     }
 };
 
-// Four requests of one form (lanes past `count` repeat the first); false where the outside
+// K packs iterated in one loop: the iteration is a chain of square roots and divisions, so the
+// processor overlaps two independent chains at little more than the cost of one.
+template <int K, class Cel>
+COILWRIGHT_LANE_INLINE void finish_together(Cel (&c)[K]) {
+    bool running = false;
+    for (int k = 0; k < K; ++k) {
+        c[k].begin();
+        running = running || c[k].running();
+    }
+    for (StepBudget budget(kCelMaxSteps, "the elliptic integral (Bulirsch's cel)"); running; budget.step()) {
+        running = false;
+        for (int k = 0; k < K; ++k)
+            if (c[k].running()) {
+                c[k].step();
+                running = running || c[k].running();
+            }
+    }
+}
+
+// K packs of requests of one form (lanes past `count` repeat the first); false where the outside
 // form does not apply to every lane (the caller then takes them one at a time).
-COILWRIGHT_LANE_INLINE bool four_of_a_form(const EndTermRequest* q, int count, EndForm form, double min_split_k2,
-                                           EndTerms* out) {
-    Pack zeta{}, r{}, omr{};
-    for (int j = 0; j < kPackWidth; ++j) {
-        const EndTermRequest& l = q[j < count ? j : 0];
-        zeta[j] = l.zeta;
-        r[j] = l.r;
-        omr[j] = l.one_minus_r;
+template <int K>
+COILWRIGHT_LANE_INLINE bool packs_of_a_form(const EndTermRequest* q, int count, EndForm form, double min_split_k2,
+                                            EndTerms* out) {
+    Pack kc[K], prefactor[K], vector_scale[K], one_plus_r[K], r[K], omr[K], zeta_over_beta[K];
+    for (int k = 0; k < K; ++k) {
+        Pack zeta{};
+        for (int j = 0; j < kPackWidth; ++j) {
+            const int i = k * kPackWidth + j;
+            const EndTermRequest& l = q[i < count ? i : 0];
+            zeta[j] = l.zeta;
+            r[k][j] = l.r;
+            omr[k][j] = l.one_minus_r;
+        }
+        one_plus_r[k] = 1.0 + r[k];
+        const Pack alpha = PackLanes::sqrt(omr[k] * omr[k] + zeta * zeta);
+        const Pack beta = PackLanes::sqrt(one_plus_r[k] * one_plus_r[k] + zeta * zeta);
+        kc[k] = alpha / beta;
+        zeta_over_beta[k] = zeta / beta;
+        const Pack k2 = (4.0 * r[k] / beta) / beta;
+        if (form == EndForm::Outside && !PackLanes::all(k2 >= min_split_k2)) return false;
+        prefactor[k] = zeta_over_beta[k] * kInvPi / one_plus_r[k];
+        vector_scale[k] = k2 * kInvPi / beta;
     }
-    const Pack one_plus_r = 1.0 + r;
-    const Pack alpha = PackLanes::sqrt(omr * omr + zeta * zeta);
-    const Pack beta = PackLanes::sqrt(one_plus_r * one_plus_r + zeta * zeta);
-    const Pack kc = alpha / beta, zeta_over_beta = zeta / beta, k2 = (4.0 * r / beta) / beta;
-    const Pack prefactor = zeta_over_beta * kInvPi / one_plus_r;
-    const Pack vector_scale = k2 * kInvPi / beta;
-    Pack axial{}, vector{};
+    Pack axial[K]{}, vector[K]{};
     if (form == EndForm::Inside) {
-        const Pack g = omr / one_plus_r;
-        auto c = CelPack<2>::after_first_step(kc);
-        c.p[0] = g + kc / g;
-        c.a[0] = 1.0 + 1.0 / g;
-        c.b[0] = 2.0 * (1.0 + kc / g);
-        c.set_vector(1, kc);
-        Pack v[2];
-        c.finish(v);
-        axial = prefactor * v[0];
-        vector = vector_scale * v[1];
+        CelPack<2> c[K]{};
+        for (int k = 0; k < K; ++k) {
+            const Pack g = omr[k] / one_plus_r[k];
+            c[k].after_first_step(kc[k]);
+            c[k].p[0] = g + kc[k] / g;
+            c[k].a[0] = 1.0 + 1.0 / g;
+            c[k].b[0] = 2.0 * (1.0 + kc[k] / g);
+            c[k].set_vector(1, kc[k]);
+        }
+        finish_together(c);
+        for (int k = 0; k < K; ++k) {
+            Pack v[2];
+            c[k].results(v);
+            axial[k] = prefactor[k] * v[0];
+            vector[k] = vector_scale[k] * v[1];
+        }
     } else if (form == EndForm::Outside) {
-        if (!PackLanes::all(k2 >= min_split_k2)) return false;
-        const Pack g = -omr / one_plus_r;
-        const Pack delta = 2.0 / one_plus_r;
-        const Pack kc_minus_g = ((4.0 * r / one_plus_r) * (zeta_over_beta * zeta_over_beta) / one_plus_r) / (kc + g);
-        auto c = CelPack<3>::after_first_step(kc);
-        c.p[0] = c.p[1] = g + kc / g;
-        c.a[0] = PackLanes::splat(1.0);
-        c.b[1] = PackLanes::splat(1.0);
-        c.set_vector(2, kc);
-        Pack v[3];
-        c.finish(v);
-        axial = prefactor * (delta * v[0] - 2.0 * kc_minus_g * v[1]) / g;
-        vector = vector_scale * v[2];
+        CelPack<3, true> c[K]{};
+        Pack g[K], kc_minus_g[K];
+        for (int k = 0; k < K; ++k) {
+            g[k] = -omr[k] / one_plus_r[k];
+            kc_minus_g[k] = ((4.0 * r[k] / one_plus_r[k]) * (zeta_over_beta[k] * zeta_over_beta[k]) / one_plus_r[k]) / (kc[k] + g[k]);
+            c[k].after_first_step(kc[k]);
+            c[k].p[0] = c[k].p[1] = g[k] + kc[k] / g[k];
+            c[k].a[0] = PackLanes::splat(1.0);
+            c[k].b[1] = PackLanes::splat(1.0);
+            c[k].set_vector(2, kc[k]);
+        }
+        finish_together(c);
+        for (int k = 0; k < K; ++k) {
+            Pack v[3];
+            c[k].results(v);
+            const Pack delta = 2.0 / one_plus_r[k];
+            axial[k] = prefactor[k] * (delta * v[0] - 2.0 * kc_minus_g[k] * v[1]) / g[k];
+            vector[k] = vector_scale[k] * v[2];
+        }
     } else {
-        auto c = CelPack<1>::after_first_step(kc);
-        c.set_vector(0, kc);
-        Pack v[1];
-        c.finish(v);
-        vector = vector_scale * v[0];
+        CelPack<1> c[K]{};
+        for (int k = 0; k < K; ++k) {
+            c[k].after_first_step(kc[k]);
+            c[k].set_vector(0, kc[k]);
+        }
+        finish_together(c);
+        for (int k = 0; k < K; ++k) {
+            Pack v[1];
+            c[k].results(v);
+            vector[k] = vector_scale[k] * v[0];
+        }
     }
-    for (int j = 0; j < count && j < kPackWidth; ++j) {
-        out[j] = EndTerms{};
-        if (form != EndForm::VectorOnly) out[j].axial = axial[j];
-        if (q[j].want_vector && q[j].r > 0.0) out[j].vector = vector[j];
+    for (int i = 0; i < count && i < K * kPackWidth; ++i) {
+        const int k = i / kPackWidth, j = i % kPackWidth;
+        out[i] = EndTerms{};
+        if (form != EndForm::VectorOnly) out[i].axial = axial[k][j];
+        if (q[i].want_vector && q[i].r > 0.0) out[i].vector = vector[k][j];
     }
     return true;
 }
 
 COILWRIGHT_LANE_INLINE void end_term_packs(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
     for (int first = 0; first < count;) {
-        const int left = std::min(kPackWidth, count - first);
+        const int left = std::min(8, count - first);
         const EndForm form = end_form_of(q[first]);
         int same = 1;
         while (same < left && end_form_of(q[first + same]) == form) ++same;
         const bool packable = form == EndForm::Inside || form == EndForm::Outside || form == EndForm::VectorOnly;
-        // A pack pays from two lanes on; a short run of one form leaves the rest for the next pack.
-        if (packable && same >= 2 && four_of_a_form(q + first, same, form, min_split_k2, out + first)) {
+        // Lanes pay from two requests on; a short run of one form leaves the rest for the next.
+        if (packable && same >= 5 && packs_of_a_form<2>(q + first, same, form, min_split_k2, out + first)) {
             first += same;
+            continue;
+        }
+        const int four = std::min(same, 4);
+        if (packable && four >= 2 && packs_of_a_form<1>(q + first, four, form, min_split_k2, out + first)) {
+            first += four;
             continue;
         }
         out[first] = end_terms(q[first], min_split_k2);

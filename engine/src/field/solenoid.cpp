@@ -111,8 +111,9 @@ struct SheetPlan {
     std::complex<double> pole;
 };
 
-SheetPlan plan_sheet(const SheetPoint& p, double max_loss, Components want) {
-    SheetPlan s{};
+// Fills `s` in place (the plans of a batch live in an array: building each in a temporary and
+// copying it stalled on the copy of its flags).
+void plan_sheet(const SheetPoint& p, double max_loss, Components want, SheetPlan& s) {
     s.sign = p.z < 0.0 ? -1.0 : 1.0;  // Bz is even in z, Br odd
     s.z = std::fabs(p.z);
     s.r = p.r;
@@ -139,19 +140,22 @@ SheetPlan plan_sheet(const SheetPoint& p, double max_loss, Components want) {
     s.closed_br = s.want_br && !s.br_quadrature;
     s.zeta_near = std::fabs(beyond);
     s.zeta_far = s.z + s.h;
-    return s;
 }
 
 bool needs_end_terms(const SheetPlan& s) { return s.closed_bz || s.closed_br; }
 
-EndTermRequest near_request(const SheetPlan& s) {
-    return {s.zeta_near, s.r, s.one_minus_r, s.closed_bz, s.closed_br};
+void set_request(EndTermRequest& q, const SheetPlan& s, double zeta) {
+    q.zeta = zeta;
+    q.r = s.r;
+    q.one_minus_r = s.one_minus_r;
+    q.want_axial = s.closed_bz;
+    q.want_vector = s.closed_br;
 }
-EndTermRequest far_request(const SheetPlan& s) { return {s.zeta_far, s.r, s.one_minus_r, s.closed_bz, s.closed_br}; }
 
 double min_split_k2_for(double max_loss) { return std::min(kSplitMinK2, 10.0 / max_loss); }
 
-FieldRZ finish_sheet(SheetPlan s, const EndTerms& near, const EndTerms& far, double max_loss) {
+FieldRZ finish_sheet(const SheetPlan& s, const EndTerms& near, const EndTerms& far, double max_loss) {
+    bool bz_quadrature = s.bz_quadrature, br_quadrature = s.br_quadrature;
     const auto quadrature_pays = [&](double centre, double half) {
         return bernstein_rho(centre, half, s.pole) > kMinQuadratureRho;
     };
@@ -171,36 +175,40 @@ FieldRZ finish_sheet(SheetPlan s, const EndTerms& near, const EndTerms& far, dou
                 d = difference(disk_from_inside(s.zeta_near, s.r, near.axial), disk_from_inside(s.zeta_far, s.r, far.axial));
             }
             bz = d.value;
-            s.bz_quadrature = d.loss > max_loss && quadrature_pays(s.z, s.h);
+            bz_quadrature = d.loss > max_loss && quadrature_pays(s.z, s.h);
         }
     }
     if (s.closed_br) {
         const Difference d = difference(near.vector, far.vector);
         br = d.value;
-        s.br_quadrature = d.loss > max_loss && quadrature_pays(s.br_centre, s.br_half);
+        br_quadrature = d.loss > max_loss && quadrature_pays(s.br_centre, s.br_half);
     }
     // Where the ends cancel, the loop field integrated along the sheet instead.
-    if (s.want_bz && s.bz_quadrature) {
+    if (s.want_bz && bz_quadrature) {
         const FieldRZ whole = integrate_loop(s.z, s.h, s.r, s.one_minus_r);
         bz = whole.bz;
-        if (s.want_br && s.br_quadrature && !s.between) {
+        if (s.want_br && br_quadrature && !s.between) {
             br = whole.br;
-            s.br_quadrature = false;
+            br_quadrature = false;
         }
     }
-    if (s.want_br && s.br_quadrature) br = integrate_loop(s.br_centre, s.br_half, s.r, s.one_minus_r).br;
+    if (s.want_br && br_quadrature) br = integrate_loop(s.br_centre, s.br_half, s.r, s.one_minus_r).br;
     return {bz, s.sign * br};
 }
 
 }  // namespace
 
 FieldRZ sheet_field_normalized(const SheetPoint& p, double max_loss, Components want) {
-    const SheetPlan s = plan_sheet(p, max_loss, want);
+    SheetPlan s;
+    plan_sheet(p, max_loss, want, s);
     EndTerms near, far;
     if (needs_end_terms(s)) {
         const double min_split_k2 = min_split_k2_for(max_loss);
-        near = end_terms(near_request(s), min_split_k2);
-        far = end_terms(far_request(s), min_split_k2);
+        EndTermRequest q;
+        set_request(q, s, s.zeta_near);
+        near = end_terms(q, min_split_k2);
+        set_request(q, s, s.zeta_far);
+        far = end_terms(q, min_split_k2);
     }
     return finish_sheet(s, near, far, max_loss);
 }
@@ -216,13 +224,13 @@ void sheet_fields_normalized(const SheetPoint* p, int count, double max_loss, Co
         int asked = 0;
         int slot[kMaxSheetBatch];
         for (int i = 0; i < n; ++i) {
-            plans[i] = plan_sheet(p[first + i], max_loss, want);
+            plan_sheet(p[first + i], max_loss, want, plans[i]);
             slot[i] = needs_end_terms(plans[i]) ? asked++ : -1;
         }
         for (int i = 0; i < n; ++i)
             if (slot[i] >= 0) {
-                requests[slot[i]] = near_request(plans[i]);
-                requests[asked + slot[i]] = far_request(plans[i]);
+                set_request(requests[slot[i]], plans[i], plans[i].zeta_near);
+                set_request(requests[asked + slot[i]], plans[i], plans[i].zeta_far);
             }
         end_terms(requests, 2 * asked, min_split_k2_for(max_loss), terms);
         for (int i = 0; i < n; ++i) {

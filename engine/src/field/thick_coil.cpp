@@ -42,6 +42,10 @@ namespace {
 constexpr double kSheetMaxLoss = 256.0;
 // On the axis the closed form is used while its own cancellation stays below this factor.
 constexpr double kAxisMaxLoss = 256.0;
+// Gauss points per segment: ceil(kRadialExponent / ln rho), exactly (no rounding up to a stored
+// rule). At 17 a winding a thousandth of its radius thick lost 1.2e-12 of |B| within 1e-11 of a
+// corner; at 18 the quadrature's share there is below the kernel's own 6e-13 (mpmath, 40 digits).
+constexpr double kRadialExponent = 18.0;
 
 // zeta ln((a2 + s2) / (a1 + s1)) with the ratio's excess over 1 formed without cancellation.
 double axis_term(double a1, double a2, double zeta) {
@@ -68,12 +72,14 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
     // The sheets of one quadrature segment in one call (their end terms run in packs).
     const auto sheets = [&](const double* a, const double* a_minus_r, int n, FieldRZ* out) {
         SheetPoint points[kMaxGaussNodes];
-        for (int i = 0; i < n; ++i)
-            points[i] = SheetPoint{z / a[i], r / a[i], a_minus_r[i] / a[i], h / a[i], beyond / a[i]};
+        for (int i = 0; i < n; ++i) {
+            const double per_a = 1.0 / a[i];  // one division instead of five (each product within an ulp)
+            points[i] = SheetPoint{z * per_a, r * per_a, a_minus_r[i] * per_a, h * per_a, beyond * per_a};
+        }
         sheet_fields_normalized(points, n, kSheetMaxLoss, want, out);
     };
     const RadialSingularities sing{r, {std::fabs(z - h), z + h}, 2};
-    const FieldRZ f = integrate_over_radius(sheets, a1, a2, sing);
+    const FieldRZ f = integrate_over_radius(sheets, a1, a2, sing, {kRadialExponent});
     return {f.bz, sign * f.br};
 }
 

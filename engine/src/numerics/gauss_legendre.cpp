@@ -1,5 +1,6 @@
 #include "numerics/gauss_legendre.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 #include "coilwright/constants.hpp"
@@ -47,6 +48,52 @@ const GaussRule& gauss_rule(int n) {
     }();
     if (n < 1 || n > kMaxGaussOrder) raise_domain_error("Gauss-Legendre order out of range (internal)");
     return rules[n];
+}
+
+namespace {
+
+template <unsigned N>
+SymmetricGaussRule from_tables() {
+    using Rule = boost::math::quadrature::gauss<double, N>;
+    const auto& abscissa = Rule::abscissa();
+    const auto& weights = Rule::weights();
+    SymmetricGaussRule out;
+    std::size_t i = 0;
+    if constexpr (N % 2 == 1) {
+        out.centre_weight = weights[0];  // odd rules list the centre first
+        i = 1;
+    }
+    for (; i < abscissa.size(); ++i, ++out.pairs) {
+        out.offset[static_cast<std::size_t>(out.pairs)] = abscissa[i];
+        out.weight[static_cast<std::size_t>(out.pairs)] = weights[i];
+    }
+    return out;
+}
+
+// From gauss_rule(n): node k and its mirror n - 1 - k differ from exact symmetry by a rounding.
+SymmetricGaussRule from_rule(int n) {
+    const GaussRule& rule = gauss_rule(n);
+    SymmetricGaussRule out;
+    for (int k = 0; k < n / 2; ++k, ++out.pairs) {
+        out.offset[static_cast<std::size_t>(k)] = 1.0 - 2.0 * rule.x[static_cast<std::size_t>(k)];
+        out.weight[static_cast<std::size_t>(k)] = 2.0 * rule.w[static_cast<std::size_t>(k)];
+    }
+    if (n % 2 == 1) out.centre_weight = 2.0 * rule.w[static_cast<std::size_t>(n / 2)];
+    return out;
+}
+
+}  // namespace
+
+const SymmetricGaussRule& symmetric_gauss_rule(int points) {
+    constexpr int kMinNodes = 7;
+    static const std::array<SymmetricGaussRule, kMaxGaussOrder + 1> exact = [] {
+        std::array<SymmetricGaussRule, kMaxGaussOrder + 1> all{};
+        for (int n = kMinNodes; n <= kMaxGaussOrder; ++n) all[static_cast<std::size_t>(n)] = from_rule(n);
+        return all;
+    }();
+    static const SymmetricGaussRule rule25 = from_tables<25>(), rule30 = from_tables<30>();
+    if (points <= kMaxGaussOrder) return exact[static_cast<std::size_t>(std::max(points, kMinNodes))];
+    return points <= 25 ? rule25 : rule30;
 }
 
 }  // namespace coilwright::internal

@@ -9,6 +9,7 @@
 // gauss_rule builds its rules once by Newton's method (gauss_legendre.cpp).
 #pragma once
 
+#include <algorithm>
 #include <array>
 #include <boost/math/quadrature/gauss.hpp>
 #include <cmath>
@@ -31,12 +32,22 @@ const GaussRule& gauss_rule(int n);
 
 // Bernstein parameter rho >= 1 of the ellipse through `pole` for the interval
 // [centre - half_width, centre + half_width]: with the foci at the ends, the ellipse through w
-// has semi-major axis A = (|w - 1| + |w + 1|) / 2 and rho = A + sqrt(A^2 - 1).
-inline double bernstein_rho(double centre, double half_width, std::complex<double> pole) {
+// has semi-major axis A = (|w - 1| + |w + 1|) / 2 and rho = A + sqrt(A^2 - 1). The semi-axis
+// alone orders poles as rho does (one square root less per pole where only the nearest counts).
+inline double bernstein_semi_axis(double centre, double half_width, std::complex<double> pole) {
     const double x = (pole.real() - centre) / half_width, y = std::fabs(pole.imag() / half_width);
     if (!(std::fabs(x) < 1e150 && y < 1e150)) return 1e150;  // far away (and no overflow below)
-    const double A = 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
-    return A + std::sqrt((A - 1.0) * (A + 1.0));
+    return 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
+}
+// The same with 1 / half_width given (for many poles against one interval).
+inline double bernstein_semi_axis_scaled(double centre, double per_half_width, std::complex<double> pole) {
+    const double x = (pole.real() - centre) * per_half_width, y = std::fabs(pole.imag() * per_half_width);
+    if (!(std::fabs(x) < 1e150 && y < 1e150)) return 1e150;
+    return 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
+}
+inline double bernstein_rho_of_axis(double A) { return A >= 1e150 ? 1e150 : A + std::sqrt((A - 1.0) * (A + 1.0)); }
+inline double bernstein_rho(double centre, double half_width, std::complex<double> pole) {
+    return bernstein_rho_of_axis(bernstein_semi_axis(centre, half_width, pole));
 }
 
 // Points needed for rho^(-2n) <= 1e-20: the margin below double precision absorbs the growth
@@ -76,39 +87,17 @@ auto gauss_legendre(F&& f, double centre, double half_width, int points) {
     return apply_gauss_rule<30>(f, centre, half_width);
 }
 
-// The nodes and weights that gauss_legendre(f, centre, half_width, points) uses, in the order it
-// adds them: the integral is half_width * sum of w[i] f(x[i]). For kernels that take many nodes
-// in one call. Returns the count (at most kMaxGaussNodes).
+// A Gauss-Legendre rule of at least `points` points as pairs of nodes +-offset[k] about the
+// centre of [-1, 1] with a shared weight, and the centre with its weight when the count is odd
+// (0 otherwise): for kernels that take many nodes in one call, and maps that compute a pair of
+// nodes for the price of one. Exactly `points` from 7 to kMaxGaussOrder (never fewer than 7, as
+// gauss_legendre), else the 25- or 30-point rule. Weights sum to 2.
 inline constexpr int kMaxGaussNodes = 30;
-
-template <unsigned N>
-int list_gauss_rule(double centre, double half_width, double* x, double* w) {
-    using Rule = boost::math::quadrature::gauss<double, N>;
-    const auto& abscissa = Rule::abscissa();
-    const auto& weights = Rule::weights();
-    int n = 0;
-    std::size_t i = 0;
-    if constexpr (N % 2 == 1) {
-        x[n] = centre;
-        w[n++] = weights[0];
-        i = 1;
-    }
-    for (; i < abscissa.size(); ++i) {
-        x[n] = centre + half_width * abscissa[i];
-        w[n++] = weights[i];
-        x[n] = centre - half_width * abscissa[i];
-        w[n++] = weights[i];
-    }
-    return n;
-}
-
-inline int gauss_legendre_nodes(double centre, double half_width, int points, double* x, double* w) {
-    if (points <= 7) return list_gauss_rule<7>(centre, half_width, x, w);
-    if (points <= 10) return list_gauss_rule<10>(centre, half_width, x, w);
-    if (points <= 15) return list_gauss_rule<15>(centre, half_width, x, w);
-    if (points <= 20) return list_gauss_rule<20>(centre, half_width, x, w);
-    if (points <= 25) return list_gauss_rule<25>(centre, half_width, x, w);
-    return list_gauss_rule<30>(centre, half_width, x, w);
-}
+struct SymmetricGaussRule {
+    int pairs = 0;
+    std::array<double, kMaxGaussNodes / 2> offset{}, weight{};
+    double centre_weight = 0.0;
+};
+const SymmetricGaussRule& symmetric_gauss_rule(int points);
 
 }  // namespace coilwright::internal

@@ -19,6 +19,7 @@
 #include <complex>
 #include <cstddef>
 #include <type_traits>
+#include <utility>
 
 #include "coilwright/constants.hpp"
 #include "coilwright/field/field_rz.hpp"
@@ -42,14 +43,99 @@ struct RadialQuadratureOptions {
 
 namespace radial_detail {
 
+struct Node {
+    double a, a_minus_r, jacobian;
+};
+
+// The plain map a = t (pieces far from r).
+struct PlainMap {
+    double r;
+    Node operator()(double t) const { return {t, t - r, 1.0}; }
+    struct About {
+        const PlainMap& map;
+        double centre;
+        std::pair<Node, Node> at_offset(double d) const { return {map(centre + d), map(centre - d)}; }
+    };
+    About about(double centre) const { return {*this, centre}; }
+};
+
+// asinh(x + i y), the principal branch, for locating the kernel's singular points in the mapped
+// variable (a quarter of the cost of the library's complex asinh, which was a quarter of the
+// quadrature's). Exact forms on the imaginary axis, where the singular points at a = r lie;
+// elsewhere log(w + sqrt(w^2 + 1)) for Re w >= 0 (asinh is odd), where nothing cancels but
+// 1 + w^2 near w = +-i, which costs digits the Bernstein estimate does not need.
+inline std::complex<double> pole_asinh(double x, double y) {
+    if (x == 0.0) {
+        const double ay = std::fabs(y);
+        if (ay <= 1.0) return {0.0, std::asin(y)};
+        return {std::acosh(ay), std::copysign(kPi / 2, y)};
+    }
+    if (x < 0.0) return -pole_asinh(-x, -y);
+    const double vr = 1.0 + (x - y) * (x + y), vi = 2.0 * x * y;  // w^2 + 1
+    const double m = std::sqrt(vr * vr + vi * vi);
+    double sr, si;  // sqrt(w^2 + 1), real part >= 0, formed without cancellation
+    if (vr >= 0.0) {
+        sr = std::sqrt(0.5 * (m + vr));
+        si = vi / (2.0 * sr);
+    } else {
+        si = std::copysign(std::sqrt(0.5 * (m - vr)), vi);
+        sr = vi / (2.0 * si);
+    }
+    const double qr = x + sr, qi = y + si;  // same signs: no cancellation
+    return {0.5 * std::log(qr * qr + qi * qi), std::atan2(qi, qr)};
+}
+
+// sinh t and cosh t (t >= 0) from one expm1: half the cost of the two library calls, sinh t to a
+// few units in the last place also as t -> 0 (no difference of nearly equal exponentials).
+inline std::pair<double, double> sinh_and_cosh(double t) {
+    const double grown = std::expm1(t), e = 1.0 + grown;
+    return {0.5 * (grown + grown / e), 0.5 * (e + 1.0 / e)};
+}
+
+// a = r + orientation s sinh t (t >= 0), with a - r straight from the map, not by subtraction:
+// it is never 0 at a node.
+struct SinhMap {
+    double r, s, orientation;
+    Node from(double sinh_t, double cosh_t) const {
+        const double offset = orientation * s * sinh_t;
+        return {r + offset, offset, s * cosh_t};
+    }
+    Node operator()(double t) const {
+        const auto [sinh_t, cosh_t] = sinh_and_cosh(t);
+        return from(sinh_t, cosh_t);
+    }
+    // Nodes c + d and c - d: exp(c +- d) = exp(c) exp(+-d), products only, so a pair costs one
+    // exponential and one division (it was four library calls and four divisions). sinh from
+    // exponentials loses up to coth(t) to the difference: below t = 1/2, expm1 instead.
+    struct About {
+        const SinhMap& map;
+        double centre, grown, shrunk;  // exp(centre), exp(-centre)
+        Node at(double t, double e, double inverse) const {
+            if (t < kSmallT) return map(t);
+            return map.from(0.5 * (e - inverse), 0.5 * (e + inverse));
+        }
+        std::pair<Node, Node> at_offset(double d) const {
+            const double ed = std::exp(d), inverse_ed = 1.0 / ed;
+            return {at(centre + d, grown * ed, shrunk * inverse_ed), at(centre - d, grown * inverse_ed, shrunk * ed)};
+        }
+    };
+    static constexpr double kSmallT = 0.5;
+    About about(double centre) const {
+        const double e = std::exp(centre);
+        return {*this, centre, e, 1.0 / e};
+    }
+};
+
 // Recursive Gauss-Legendre in a variable t, with the kernel's singular points mapped to t.
 // `at(t)` returns {a, a - r, da/dt}.
 template <class Kernel, class Map>
 FieldRZ integrate_segment(const Kernel& kernel, const Map& at, double t0, double t1, const std::complex<double>* poles,
                           std::size_t n_poles, const RadialQuadratureOptions& opt, int depth) {
     const double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
-    double rho = HUGE_VAL;
-    for (std::size_t k = 0; k < n_poles; ++k) rho = std::min(rho, bernstein_rho(centre, half, poles[k]));
+    double axis = HUGE_VAL;
+    const double per_half = 1.0 / half;
+    for (std::size_t k = 0; k < n_poles; ++k) axis = std::min(axis, bernstein_semi_axis_scaled(centre, per_half, poles[k]));
+    const double rho = bernstein_rho_of_axis(axis);
     if (rho < opt.min_rho && depth < opt.max_depth) {
         FieldRZ sum = integrate_segment(kernel, at, t0, centre, poles, n_poles, opt, depth + 1);
         sum += integrate_segment(kernel, at, centre, t1, poles, n_poles, opt, depth + 1);
@@ -57,17 +143,25 @@ FieldRZ integrate_segment(const Kernel& kernel, const Map& at, double t0, double
     }
     const int points = gauss_points_for(rho, opt.exponent);
     if constexpr (std::is_invocable_v<const Kernel&, const double*, const double*, int, FieldRZ*>) {
-        // A kernel for many radii at once: all nodes of the segment in one call, added in the
-        // order and with the operations of gauss_legendre (the same bits as node by node).
-        double t[kMaxGaussNodes], w[kMaxGaussNodes], a[kMaxGaussNodes], a_minus_r[kMaxGaussNodes], jacobian[kMaxGaussNodes];
+        // A kernel for many radii at once: all nodes of the segment in one call, the map taking
+        // them in pairs about the centre.
+        const SymmetricGaussRule& rule = symmetric_gauss_rule(points);
+        double w[kMaxGaussNodes], a[kMaxGaussNodes], a_minus_r[kMaxGaussNodes], jacobian[kMaxGaussNodes];
         FieldRZ value[kMaxGaussNodes];
-        const int n = gauss_legendre_nodes(centre, half, points, t, w);
-        for (int i = 0; i < n; ++i) {
-            const auto node = at(t[i]);
-            a[i] = node.a;
-            a_minus_r[i] = node.a_minus_r;
-            jacobian[i] = node.jacobian;
+        int n = 0;
+        const auto put = [&](const Node& node, double weight) {
+            a[n] = node.a;
+            a_minus_r[n] = node.a_minus_r;
+            jacobian[n] = node.jacobian;
+            w[n++] = weight;
+        };
+        const auto pairs = at.about(centre);
+        for (int k = 0; k < rule.pairs; ++k) {
+            const auto [right, left] = pairs.at_offset(half * rule.offset[static_cast<std::size_t>(k)]);
+            put(right, rule.weight[static_cast<std::size_t>(k)]);
+            put(left, rule.weight[static_cast<std::size_t>(k)]);
         }
+        if (rule.centre_weight != 0.0) put(at(centre), rule.centre_weight);
         kernel(a, a_minus_r, n, value);
         FieldRZ sum{};
         for (int i = 0; i < n; ++i) sum += w[i] * (jacobian[i] * value[i]);
@@ -80,10 +174,6 @@ FieldRZ integrate_segment(const Kernel& kernel, const Map& at, double t0, double
         return gauss_legendre(mapped, centre, half, points);
     }
 }
-
-struct Node {
-    double a, a_minus_r, jacobian;
-};
 
 }  // namespace radial_detail
 
@@ -111,8 +201,7 @@ FieldRZ integrate_over_radius(const Kernel& kernel, double a1, double a2, const 
             // lose digits to a = r +- s sinh t cancelling), poles +-r + i zeta.
             for (std::size_t k = 0; k < sing.count; ++k)
                 for (double base : {r, -r}) poles[n++] = {base, sing.zetas[k]};
-            const auto at = [&](double a) { return Node{a, a - r, 1.0}; };
-            total += radial_detail::integrate_segment(kernel, at, x0, x1, poles, n, opt, 0);
+            total += radial_detail::integrate_segment(kernel, radial_detail::PlainMap{r}, x0, x1, poles, n, opt, 0);
             continue;
         }
         // Right of r: a = r + s sinh t; left of r: a = r - s sinh t; t >= 0 on the piece.
@@ -125,20 +214,18 @@ FieldRZ integrate_over_radius(const Kernel& kernel, double a1, double a2, const 
         // matters.
         for (std::size_t k = 0; k < sing.count; ++k)
             for (double base : {r, -r}) {
-                const std::complex<double> t = std::asinh(orientation * (std::complex<double>(base, sing.zetas[k]) - r) / s);
+                const std::complex<double> t = radial_detail::pole_asinh(orientation * (base - r) / s, orientation * sing.zetas[k] / s);
                 // A point on an end plane inside the winding's radii (zeta = 0) touches a rim at
                 // a = r, t = 0: an integrable singularity at the end of the piece, inside the
                 // sliver a - r < s whose share is below the scale floor. Not a segmenting pole.
                 if (!(t0 == 0.0 && t == std::complex<double>(0.0, 0.0))) poles[n++] = t;
+                // The images of a point above a = r lie at -Re t, farther from the piece (t >= 0)
+                // than t itself: they never decide the node count.
+                if (base == r) continue;
                 poles[n++] = std::complex<double>(0.0, kPi) - t;
                 poles[n++] = std::complex<double>(0.0, -kPi) - t;
             }
-        const auto at = [&](double t) {
-            // a - r straight from the map, not by subtraction: it is never 0 at a node.
-            const double offset = orientation * s * std::sinh(t);
-            return Node{r + offset, offset, s * std::cosh(t)};
-        };
-        total += radial_detail::integrate_segment(kernel, at, t0, t1, poles, n, opt, 0);
+        total += radial_detail::integrate_segment(kernel, radial_detail::SinhMap{r, s, orientation}, t0, t1, poles, n, opt, 0);
     }
     return total;
 }
