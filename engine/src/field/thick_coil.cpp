@@ -46,6 +46,7 @@ constexpr double kAxisMaxLoss = 256.0;
 // rule). At 17 a winding a thousandth of its radius thick lost 1.2e-12 of |B| within 1e-11 of a
 // corner; at 18 the quadrature's share there is below the kernel's own 6e-13 (mpmath, 40 digits).
 constexpr double kRadialExponent = 18.0;
+constexpr double kCornerExponent = 20.0;  // the route by ends near a corner (thick_corner.cpp)
 
 // zeta ln((a2 + s2) / (a1 + s1)) with the ratio's excess over 1 formed without cancellation.
 double axis_term(double a1, double a2, double zeta) {
@@ -67,6 +68,10 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
         const double diff = t1 - t2;
         if (z < h || std::fabs(t1) <= kAxisMaxLoss * std::fabs(diff)) return {0.5 * diff, 0.0};
         // Far out on the axis the two ends cancel: integrate the sheets instead (below).
+    }
+    if (near_a_winding_corner(a1, a2, h, z, r)) {
+        const FieldRZ f = thick_field_by_ends(a1, a2, h, z, r, want, kCornerExponent);
+        return {f.bz, sign * f.br};
     }
     const double beyond = z - h;  // exact where it matters (z close to h)
     // The sheets of one quadrature segment in one call (their end terms run in packs).

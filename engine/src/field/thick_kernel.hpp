@@ -11,4 +11,9 @@ namespace coilwright::internal {
 FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double r,
                                 Components want = Components::Both);
 
+// The same near a corner of the winding (near_a_winding_corner), integrated end plane by end plane
+// (thick_corner.cpp); `exponent` sets the Gauss points as for the general route.
+bool near_a_winding_corner(double a1, double a2, double h, double z, double r);
+FieldRZ thick_field_by_ends(double a1, double a2, double h, double z, double r, Components want, double exponent);
+
 }  // namespace coilwright::internal
