@@ -72,11 +72,15 @@ Points hard_and_random_points(double a) {
 
 std::vector<BatchCode> codes() {
     std::vector<BatchCode> out{BatchCode::Baseline};
-    if (internal::best_batch_code() == BatchCode::Avx2Fma) out.push_back(BatchCode::Avx2Fma);
+    const BatchCode best = internal::best_batch_code();
+    if (best == BatchCode::Avx2Fma || best == BatchCode::Avx512) out.push_back(BatchCode::Avx2Fma);
+    if (best == BatchCode::Avx512) out.push_back(BatchCode::Avx512);
     return out;
 }
 
-const char* name(BatchCode c) { return c == BatchCode::Avx2Fma ? "AVX2+FMA" : "baseline"; }
+const char* name(BatchCode c) {
+    return c == BatchCode::Avx512 ? "AVX-512" : c == BatchCode::Avx2Fma ? "AVX2+FMA" : "baseline";
+}
 
 }  // namespace
 
@@ -128,7 +132,7 @@ TEST(LoopBatch, TheDefaultEntryPointsUseTheSameCode) {
 }
 
 TEST(LoopBatch, TheFusedCopyAgreesWithTheBaselineToRounding) {
-    if (internal::best_batch_code() != BatchCode::Avx2Fma) GTEST_SKIP() << "the processor has no AVX2 and FMA";
+    if (internal::best_batch_code() == BatchCode::Baseline) GTEST_SKIP() << "the processor has no AVX2 and FMA";
     // Relative to |B| at the point: the fused products change roundings only. Each copy is held
     // to 5e-15 of mpmath in test_loop_reference.cpp; apart they are at most 2.1e-15 of |B|, far
     // from the loop (1e4 to 1e8 radii; at two such points mpmath's closed form at 50 digits
@@ -159,6 +163,59 @@ TEST(LoopBatch, TheFusedCopyAgreesWithTheBaselineToRounding) {
                                 << ", r/a = " << p.r[worst_at] / loop.radius;
     }
 }
+
+TEST(LoopBatch, EightLanesGiveTheBitsOfFour) {
+    // The AVX-512 copy runs the fused arithmetic of the AVX2 copy on eight lanes: the same bits,
+    // also where blocks end part-way (counts not a multiple of the block) and points are bad.
+    if (internal::best_batch_code() != BatchCode::Avx512) GTEST_SKIP() << "the processor has no AVX-512";
+    const LoopSpec loop{0.2, 30, 1.25};
+    Points p = hard_and_random_points(loop.radius);
+    std::mt19937_64 rng(5);
+    std::uniform_real_distribution<double> u(0.0, 1.0);
+    for (int i = 0; i < 100003; ++i) p.add((6 * u(rng) - 3) * loop.radius, 3 * u(rng) * loop.radius);
+    const std::size_t n = p.z.size();
+    for (bool add : {false, true}) {
+        std::vector<double> bz8(n, 0.5), br8(n, -0.5), bz4(n, 0.5), br4(n, -0.5);
+        const std::size_t failed8 = internal::loop_field_batch_using(BatchCode::Avx512, loop, 0.01, p.z.data(),
+                                                                     p.r.data(), n, bz8.data(), br8.data(), add);
+        const std::size_t failed4 = internal::loop_field_batch_using(BatchCode::Avx2Fma, loop, 0.01, p.z.data(),
+                                                                     p.r.data(), n, bz4.data(), br4.data(), add);
+        EXPECT_EQ(failed8, failed4);
+        std::size_t differ = 0;
+        for (std::size_t i = 0; i < n; ++i)
+            if (bits(bz8[i]) != bits(bz4[i]) || bits(br8[i]) != bits(br4[i])) ++differ;
+        EXPECT_EQ(differ, 0u) << (add ? "adding" : "storing");
+    }
+}
+
+#ifdef COILWRIGHT_VECTOR_LANES
+TEST(LoopBatch, EightLaneComparisonsAreTheOperators) {
+    // The eight-lane copy compares by the bits of the difference (lanes.hpp): the same answers as
+    // < and <= on zeros of both signs, subnormals, neighbours, huge values, infinities and NaN
+    // (inf <= inf aside: false there, as documented).
+    const double inf = HUGE_VAL, nan = std::numeric_limits<double>::quiet_NaN();
+    std::vector<double> v{0.0, -0.0, 1.0, -1.0, 4.9e-324, -4.9e-324, 2.2250738585072014e-308, 1e308, -1e308,
+                          std::numeric_limits<double>::max(), inf, -inf, nan, -nan, 1.0 + 2.220446049250313e-16,
+                          1.0 - 1.1102230246251565e-16, 3.0, 3.0000000000000004, 1e-100};
+    std::mt19937_64 rng(3);
+    std::uniform_real_distribution<double> u(-1.0, 1.0);
+    for (int i = 0; i < 200; ++i) v.push_back(u(rng) * std::pow(10.0, 300 * u(rng)));
+    using L = internal::FusedPack8Lanes;
+    std::size_t wrong = 0;
+    for (double x : v)
+        for (double y : v) {
+            const L::V vx = L::splat(x), vy = L::splat(y);
+            const L::M lt = L::less(vx, vy), le = L::less_equal(vx, vy);
+            for (int j = 0; j < L::kWidth; ++j) {
+                if ((lt[j] != 0) != (x < y)) ++wrong;
+                const bool expected_le = (std::isinf(x) && x == y) ? false : (x <= y);
+                if ((le[j] != 0) != expected_le) ++wrong;
+                if (lt[j] != 0 && lt[j] != -1) ++wrong;  // all ones or all zeros, as a mask
+            }
+        }
+    EXPECT_EQ(wrong, 0u);
+}
+#endif
 
 TEST(LoopBatch, AddingLoopsIsTheSumOfMovedLoops) {
     // A Helmholtz pair as two moved loops: each point gets loop_field(z - centre) added.

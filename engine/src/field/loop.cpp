@@ -103,7 +103,7 @@ FieldRZ loop_field_with(BatchCode code, const LoopSpec& loop, double z, double r
     FieldRZ f;
     if (internal::in_kernel_range<ScalarLanes>(z_n, r_n, one_minus_r)) {
 #ifdef COILWRIGHT_HAVE_AVX2_FMA_CODE
-        if (code == BatchCode::Avx2Fma && processor_has_avx2_fma())
+        if ((code == BatchCode::Avx2Fma || code == BatchCode::Avx512) && processor_has_avx2_fma())
             f = kernel_point_fused(scale, z_n, r_n, one_minus_r);
         else
 #endif

@@ -39,10 +39,10 @@ namespace {
 
 // Points go through the kernel in blocks of kPacks packs; within a block the packs take their
 // Gauss steps side by side, so the processor overlaps their long chains of square roots and
-// divisions instead of waiting for each in turn.
-constexpr std::size_t kLanes = kPackWidth;
+// divisions instead of waiting for each in turn. A block holds at most kMaxBlock points (eight
+// packs of the widest lanes).
 constexpr std::size_t kPacks = 8;
-constexpr std::size_t kBlock = kPacks * kLanes;
+constexpr std::size_t kMaxBlock = 64;
 
 // Field at z[i] - centre_z, r[i] for one block of `count` <= kBlock points; stores (add =
 // false) or adds (add = true) into bz, br. Returns the number of points in error. Compiled
@@ -55,6 +55,7 @@ COILWRIGHT_LANE_INLINE std::size_t block(BatchCode code, const LoopSpec& loop, d
     using V = typename L::V;
     using M = typename L::M;
     using State = KernelState<L>;
+    constexpr std::size_t kLanes = static_cast<std::size_t>(L::kWidth);
     const double a = loop.radius;
     State state[kPacks];
     M in_range[kPacks];
@@ -110,7 +111,7 @@ COILWRIGHT_LANE_INLINE std::size_t block(BatchCode code, const LoopSpec& loop, d
         V fz = field_z[k], fr = field_r[k];
         const std::size_t first = k * kLanes;
         // Lanes to redo one by one: outside the kernel's range, or a result that is not finite.
-        const M redo = L::negate(in_range[k] & (L::abs(fz) <= huge) & (L::abs(fr) <= huge));
+        const M redo = L::negate(in_range[k] & L::less_equal(L::abs(fz), huge) & L::less_equal(L::abs(fr), huge));
         if (converged && first + kLanes <= count && !L::any(redo)) {
             if (add) {
                 fz = L::load(bz + first) + fz;
@@ -140,6 +141,11 @@ COILWRIGHT_LANE_INLINE std::size_t block(BatchCode code, const LoopSpec& loop, d
 
 using BlockFn = std::size_t (*)(const LoopSpec&, double, double, double, const double*, const double*, std::size_t,
                                 double*, double*, bool);
+// A copy of the block code and how many points it takes at a time.
+struct BlockCode {
+    BlockFn run;
+    std::size_t points;
+};
 
 #if defined(__GNUC__) || defined(__clang__)
 #define COILWRIGHT_FLATTEN [[gnu::flatten]]
@@ -162,29 +168,48 @@ COILWRIGHT_FLATTEN std::size_t block_baseline(const LoopSpec& loop, double inv_a
 }
 #endif
 
-BlockFn block_for(BatchCode code) {
+#if defined(COILWRIGHT_HAVE_AVX512_CODE) && defined(COILWRIGHT_VECTOR_LANES)
+#define COILWRIGHT_LOOP_BATCH_AVX512 1
+[[gnu::target("avx512f,avx512dq,fma"), gnu::flatten]] std::size_t block_avx512(
+    const LoopSpec& loop, double inv_a, double scale, double centre_z, const double* z, const double* r,
+    std::size_t count, double* bz, double* br, bool add) {
+    return block<FusedPack8Lanes>(BatchCode::Avx512, loop, inv_a, scale, centre_z, z, r, count, bz, br, add);
+}
+#endif
+
+BlockCode block_for(BatchCode code) {
+#ifdef COILWRIGHT_LOOP_BATCH_AVX512
+    if (code == BatchCode::Avx512 && processor_has_avx512()) return {block_avx512, kPacks * 8};
+#endif
 #ifdef COILWRIGHT_HAVE_AVX2_FMA_CODE
-    if (code == BatchCode::Avx2Fma && processor_has_avx2_fma()) return block_avx2_fma;
+    if ((code == BatchCode::Avx2Fma || code == BatchCode::Avx512) && processor_has_avx2_fma())
+        return {block_avx2_fma, kPacks * kPackWidth};
 #endif
     (void)code;
-    return block_baseline;
+    return {block_baseline, kPacks * kPackWidth};
 }
 
 }  // namespace
 
-BatchCode best_batch_code() { return processor_has_avx2_fma() ? BatchCode::Avx2Fma : BatchCode::Baseline; }
+BatchCode best_batch_code() {
+#ifdef COILWRIGHT_LOOP_BATCH_AVX512
+    if (processor_has_avx512()) return BatchCode::Avx512;
+#endif
+    return processor_has_avx2_fma() ? BatchCode::Avx2Fma : BatchCode::Baseline;
+}
 
 std::size_t loop_field_batch_using(BatchCode code, const LoopSpec& loop, double centre_z, const double* z,
                                    const double* r, std::size_t n, double* bz, double* br, bool add) {
     validate(loop);
     check::finite(centre_z, "centre z");
-    const BlockFn run_block = block_for(code);
+    const BlockCode block_code = block_for(code);
+    const std::size_t block_points = block_code.points;
     const double inv_a = 1.0 / loop.radius;
     const double scale = kMu0 * loop.turns * loop.current / loop.radius;
     std::size_t failed = 0;
-    for (std::size_t start = 0; start < n; start += kBlock) {
-        const std::size_t count = n - start < kBlock ? n - start : kBlock;
-        failed += run_block(loop, inv_a, scale, centre_z, z + start, r + start, count, bz + start, br + start, add);
+    for (std::size_t start = 0; start < n; start += block_points) {
+        const std::size_t count = n - start < block_points ? n - start : block_points;
+        failed += block_code.run(loop, inv_a, scale, centre_z, z + start, r + start, count, bz + start, br + start, add);
     }
     return failed;
 }

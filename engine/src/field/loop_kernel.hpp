@@ -118,7 +118,7 @@ struct KernelState {
     }
 
     // Lanes whose iteration has not converged yet.
-    COILWRIGHT_LANE_INLINE typename L::M active() const { return L::abs(g - qc) > g * kTailGap; }
+    COILWRIGHT_LANE_INLINE typename L::M active() const { return L::less(g * kTailGap, L::abs(g - qc)); }
 
     // One Gauss step in the lanes of `m` (the others keep their state); in every lane when
     // kEveryLane (no per-lane selects while no lane has converged). Bulirsch's step is
@@ -210,8 +210,9 @@ struct KernelState {
 template <class L>
 COILWRIGHT_LANE_INLINE auto in_kernel_range(typename L::V z_n, typename L::V r_n, typename L::V one_minus_r) {
     const typename L::V z2 = z_n * z_n;
-    return (L::abs(z_n) < kKernelReach) & (r_n >= 0.0) & (r_n < kKernelReach) &
-           (one_minus_r * one_minus_r + z2 > kKernelNearest2);
+    const auto reach = L::splat(kKernelReach);
+    return L::less(L::abs(z_n), reach) & L::less_equal(L::splat(0.0), r_n) & L::less(r_n, reach) &
+           L::less(L::splat(kKernelNearest2), one_minus_r * one_minus_r + z2);
 }
 
 }  // namespace coilwright::internal

@@ -14,4 +14,17 @@ bool processor_has_avx2_fma() {
 #endif
 }
 
+bool processor_has_avx512() {
+#ifdef COILWRIGHT_HAVE_AVX512_CODE
+    static const bool has = [] {
+        __builtin_cpu_init();
+        return processor_has_avx2_fma() && __builtin_cpu_supports("avx512f") != 0 &&
+               __builtin_cpu_supports("avx512dq") != 0;
+    }();
+    return has;
+#else
+    return false;
+#endif
+}
+
 }  // namespace coilwright::internal

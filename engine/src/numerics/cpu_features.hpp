@@ -11,4 +11,12 @@ namespace coilwright::internal {
 #endif
 bool processor_has_avx2_fma();
 
+// The same for eight-lane copies with AVX-512 (F and DQ; FMA too), where the compiler makes them
+// with compiler vector types. Not for Windows: its x64 ABI keeps the stack 16-byte aligned and
+// GCC does not realign it for 64-byte spills.
+#if defined(COILWRIGHT_HAVE_AVX2_FMA_CODE) && !defined(_WIN32)
+#define COILWRIGHT_HAVE_AVX512_CODE 1
+#endif
+bool processor_has_avx512();
+
 }  // namespace coilwright::internal

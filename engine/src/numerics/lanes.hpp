@@ -53,6 +53,8 @@ struct ScalarLanes {
     COILWRIGHT_LANE_INLINE static V mul_add(V a, V b, V c) { return a * b + c; }
     COILWRIGHT_LANE_INLINE static V select(M m, V a, V b) { return m ? a : b; }
     COILWRIGHT_LANE_INLINE static M negate(M m) { return !m; }
+    COILWRIGHT_LANE_INLINE static M less(V x, V y) { return x < y; }
+    COILWRIGHT_LANE_INLINE static M less_equal(V x, V y) { return x <= y; }
     COILWRIGHT_LANE_INLINE static bool any(M m) { return m; }
     COILWRIGHT_LANE_INLINE static bool all(M m) { return m; }
 };
@@ -191,6 +193,8 @@ struct PackLanes {
     COILWRIGHT_LANE_INLINE static V mul_add(V a, V b, V c) { return a * b + c; }
     COILWRIGHT_LANE_INLINE static V select(M m, V a, V b) { return pack_select(m, a, b); }
     COILWRIGHT_LANE_INLINE static M negate(M m) { return ~m; }
+    COILWRIGHT_LANE_INLINE static M less(V x, V y) { return x < y; }
+    COILWRIGHT_LANE_INLINE static M less_equal(V x, V y) { return x <= y; }
     COILWRIGHT_LANE_INLINE static unsigned lane_bits(M m) { return pack_lane_bits(m); }
     COILWRIGHT_LANE_INLINE static bool any(M m) { return lane_bits(m) != 0; }
     COILWRIGHT_LANE_INLINE static bool all(M m) { return lane_bits(m) == (1u << kWidth) - 1; }
@@ -212,5 +216,76 @@ struct FusedPackLanes : PackLanes {
         return out;
     }
 };
+
+#ifdef COILWRIGHT_VECTOR_LANES
+// Eight lanes, one AVX-512 register: only for code compiled for such processors
+// (gnu::target("avx512f,avx512dq,fma")), with the fused mul_add of FusedPackLanes, so each lane
+// computes what FusedPackLanes and FusedScalarLanes compute, bit for bit.
+using Pack8 = double __attribute__((vector_size(8 * sizeof(double))));
+using Pack8Mask = decltype(Pack8{} < Pack8{});
+
+struct FusedPack8Lanes {
+    using V = Pack8;
+    using M = Pack8Mask;
+    static constexpr int kWidth = 8;
+    COILWRIGHT_LANE_INLINE static V splat(double x) { return V{} + x; }
+    COILWRIGHT_LANE_INLINE static V sqrt(V x) {
+        V out{};
+        for (int i = 0; i < kWidth; ++i) out[i] = std::sqrt(x[i]);  // one packed instruction with -fno-math-errno
+        return out;
+    }
+    COILWRIGHT_LANE_INLINE static V abs(V x) {
+        return (V)((M)x & ~(M{} + static_cast<long long>(0x8000000000000000ULL)));
+    }
+    COILWRIGHT_LANE_INLINE static V mul_add(V a, V b, V c) {
+        V out{};
+        for (int i = 0; i < kWidth; ++i) out[i] = std::fma(a[i], b[i], c[i]);  // one vfmadd where inlined with FMA
+        return out;
+    }
+    COILWRIGHT_LANE_INLINE static V select(M m, V a, V b) { return (V)(((M)a & m) | ((M)b & ~m)); }
+    COILWRIGHT_LANE_INLINE static M negate(M m) { return ~m; }
+    // Comparisons by arithmetic on the difference's bits: GCC lowers a comparison of 512-bit
+    // vectors in a function compiled for processors without AVX-512 (as these always-inline
+    // helpers are, before they are inlined into the AVX-512 copy) to one lane at a time, but not
+    // subtractions, shifts and logic. For finite or infinite x and y the rounded x - y is
+    // negative exactly when x < y, zero exactly when x == y (finite), and NaN when either is NaN:
+    // so these are x < y and x <= y bit for bit, except that inf <= inf comes out false (not
+    // met in the kernel, which compares with finite bounds).
+    COILWRIGHT_LANE_INLINE static M negative_bits(M d) { return d >> 63; }
+    COILWRIGHT_LANE_INLINE static M zero_bits(M magnitude) { return (magnitude - 1) >> 63; }
+    COILWRIGHT_LANE_INLINE static M number_bits(M magnitude) {
+        return (magnitude - static_cast<long long>(0x7ff0000000000001ULL)) >> 63;
+    }
+    COILWRIGHT_LANE_INLINE static M less(V x, V y) {
+        const M d = (M)(x - y), magnitude = d & static_cast<long long>(0x7fffffffffffffffULL);
+        return negative_bits(d) & ~zero_bits(magnitude) & number_bits(magnitude);
+    }
+    COILWRIGHT_LANE_INLINE static M less_equal(V x, V y) {
+        const M d = (M)(x - y), magnitude = d & static_cast<long long>(0x7fffffffffffffffULL);
+        return (negative_bits(d) | zero_bits(magnitude)) & number_bits(magnitude);
+    }
+    // Through the two four-lane halves: OR (any) or AND (all), then the four-lane sign-bit test.
+    COILWRIGHT_LANE_INLINE static void halves(M m, PackMask& low, PackMask& high) {
+        std::memcpy(&low, &m, sizeof low);
+        std::memcpy(&high, reinterpret_cast<const char*>(&m) + sizeof low, sizeof high);
+    }
+    COILWRIGHT_LANE_INLINE static bool any(M m) {
+        PackMask low, high;
+        halves(m, low, high);
+        return pack_lane_bits(low | high) != 0;
+    }
+    COILWRIGHT_LANE_INLINE static bool all(M m) {
+        PackMask low, high;
+        halves(m, low, high);
+        return pack_lane_bits(low & high) == (1u << kPackWidth) - 1;
+    }
+    COILWRIGHT_LANE_INLINE static V load(const double* p) {
+        V v;
+        std::memcpy(&v, p, sizeof v);
+        return v;
+    }
+    COILWRIGHT_LANE_INLINE static void store(double* p, V v) { std::memcpy(p, &v, sizeof v); }
+};
+#endif
 
 }  // namespace coilwright::internal
