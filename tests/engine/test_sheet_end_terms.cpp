@@ -54,17 +54,16 @@ TEST(SheetEndTerms, PacksGiveTheBitsOfOneAtATime) {
     const std::vector<EndTermRequest> q = mixed_requests(rng);
     const int n = static_cast<int>(q.size());
     for (double min_split_k2 : {10.0 / 256.0, 0.7}) {
-        std::vector<EndTerms> packs(q.size()), single(q.size());
-        end_terms_using(EndTermCode::Packs, q.data(), n, min_split_k2, packs.data());
+        std::vector<EndTerms> widest(q.size()), four(q.size()), single(q.size());
+        end_terms_using(EndTermCode::Packs, q.data(), n, min_split_k2, widest.data());
+        end_terms_using(EndTermCode::FourLanes, q.data(), n, min_split_k2, four.data());
         end_terms_using(EndTermCode::OneByOne, q.data(), n, min_split_k2, single.data());
         int differ = 0;
         for (int i = 0; i < n; ++i) {
-            const EndTerms alone = end_terms(q[static_cast<std::size_t>(i)], min_split_k2);
-            const auto& p = packs[static_cast<std::size_t>(i)];
-            const auto& s = single[static_cast<std::size_t>(i)];
-            if (!same_bits(p.axial, s.axial) || !same_bits(p.vector, s.vector) || !same_bits(alone.axial, s.axial) ||
-                !same_bits(alone.vector, s.vector))
-                ++differ;
+            const auto at = static_cast<std::size_t>(i);
+            const EndTerms alone = end_terms(q[at], min_split_k2);
+            for (const EndTerms& t : {widest[at], four[at], alone})
+                if (!same_bits(t.axial, single[at].axial) || !same_bits(t.vector, single[at].vector)) ++differ;
         }
         EXPECT_EQ(differ, 0) << "of " << n << " requests, min_split_k2 " << min_split_k2;
     }

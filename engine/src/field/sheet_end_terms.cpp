@@ -158,62 +158,63 @@ EndForm end_form_of(const EndTermRequest& q) {
     return EndForm::Scalar;                             // r = 1
 }
 
-// CelLoop<N>::finish on a pack: lanes that have converged keep their state while the others
-// step, so each lane ends with the bits of the scalar loop. With kSharedP the first two
-// integrands start with one p (X and Y of the outside form), which then stays equal: one division
-// serves both, as it gives the same bits as two.
-template <int N, bool kSharedP = false>
+// CelLoop<N>::finish on a pack of lanes L (four with AVX2, eight with AVX-512): lanes that have
+// converged keep their state while the others step, so each lane ends with the bits of the
+// scalar loop. With kSharedP the first two integrands start with one p (X and Y of the outside
+// form), which then stays equal: one division serves both, as it gives the same bits as two.
+template <class L, int N, bool kSharedP = false>
 struct CelPack {
-    Pack qc, em, g, e;
-    Pack p[N], a[N], b[N];
-    PackMask active;
+    using V = typename L::V;
+    V qc, em, g, e;
+    V p[N], a[N], b[N];
+    typename L::M active;
 
-    COILWRIGHT_LANE_INLINE void after_first_step(Pack kc) {
+    COILWRIGHT_LANE_INLINE void after_first_step(V kc) {
         qc = kc;
         em = 1.0 + kc;
-        g = PackLanes::splat(1.0);
+        g = L::splat(1.0);
         e = kc;
     }
 
-    COILWRIGHT_LANE_INLINE void set_vector(int i, Pack kc) {
+    COILWRIGHT_LANE_INLINE void set_vector(int i, V kc) {
         p[i] = 1.0 + kc;
-        a[i] = Pack{};
+        a[i] = V{};
         b[i] = 2.0 / (1.0 + kc);
     }
 
     COILWRIGHT_LANE_INLINE void begin() {
-        if (!PackLanes::all(qc > Pack{})) raise_singular_point("the point is too close to a current filament to be represented");
-        active = pack_abs(g - qc) > g * kCelTolerance;
+        if (!L::all(L::less(V{}, qc))) raise_singular_point("the point is too close to a current filament to be represented");
+        active = L::less(g * kCelTolerance, L::abs(g - qc));
     }
-    COILWRIGHT_LANE_INLINE bool running() const { return PackLanes::any(active); }
+    COILWRIGHT_LANE_INLINE bool running() const { return L::any(active); }
 
     COILWRIGHT_LANE_INLINE void step() {
-        const Pack qc_next = 2.0 * PackLanes::sqrt(e);
-        const Pack e_next = qc_next * em;
-        Pack inv_p_shared{};
+        const V qc_next = 2.0 * L::sqrt(e);
+        const V e_next = qc_next * em;
+        V inv_p_shared{};
         for (int i = 0; i < N; ++i) {
             if (!(kSharedP && i == 1)) inv_p_shared = 1.0 / p[i];
-            const Pack inv_p = inv_p_shared;
-            const Pack ge = e_next * inv_p;
-            const Pack f = a[i];
-            a[i] = pack_select(active, a[i] + b[i] * inv_p, a[i]);
-            b[i] = pack_select(active, 2.0 * (b[i] + f * ge), b[i]);
-            p[i] = pack_select(active, p[i] + ge, p[i]);
+            const V inv_p = inv_p_shared;
+            const V ge = e_next * inv_p;
+            const V f = a[i];
+            a[i] = L::select(active, a[i] + b[i] * inv_p, a[i]);
+            b[i] = L::select(active, 2.0 * (b[i] + f * ge), b[i]);
+            p[i] = L::select(active, p[i] + ge, p[i]);
         }
-        qc = pack_select(active, qc_next, qc);
-        e = pack_select(active, e_next, e);
-        g = pack_select(active, em, g);
-        em = pack_select(active, em + qc_next, em);
-        active = pack_abs(g - qc) > g * kCelTolerance;
+        qc = L::select(active, qc_next, qc);
+        e = L::select(active, e_next, e);
+        g = L::select(active, em, g);
+        em = L::select(active, em + qc_next, em);
+        active = L::less(g * kCelTolerance, L::abs(g - qc));
     }
 
-    COILWRIGHT_LANE_INLINE void results(Pack out[N]) const {
+    COILWRIGHT_LANE_INLINE void results(V out[N]) const {
         for (int i = 0; i < N; ++i) out[i] = kHalfPi * (b[i] + a[i] * em) / (em * (em + p[i]));
     }
 };
 
 // K packs iterated in one loop: the iteration is a chain of square roots and divisions, so the
-// processor overlaps two independent chains at little more than the cost of one.
+// processor overlaps independent chains.
 template <int K, class Cel>
 COILWRIGHT_LANE_INLINE void finish_together(Cel (&c)[K]) {
     bool running = false;
@@ -232,35 +233,39 @@ COILWRIGHT_LANE_INLINE void finish_together(Cel (&c)[K]) {
 }
 
 // K packs of requests of one form (lanes past `count` repeat the first); false where the outside
-// form does not apply to every lane (the caller then takes them one at a time).
-template <int K>
+// form does not apply to every lane (the caller then takes them one at a time). The arithmetic
+// is one_end's, operation for operation (no fused multiply-adds: the engine is compiled without
+// contraction).
+template <class L, int K>
 COILWRIGHT_LANE_INLINE bool packs_of_a_form(const EndTermRequest* q, int count, EndForm form, double min_split_k2,
                                             EndTerms* out) {
-    Pack kc[K], prefactor[K], vector_scale[K], one_plus_r[K], r[K], omr[K], zeta_over_beta[K];
+    using V = typename L::V;
+    constexpr int W = L::kWidth;
+    V kc[K], prefactor[K], vector_scale[K], one_plus_r[K], r[K], omr[K], zeta_over_beta[K];
     for (int k = 0; k < K; ++k) {
-        Pack zeta{};
-        for (int j = 0; j < kPackWidth; ++j) {
-            const int i = k * kPackWidth + j;
+        V zeta{};
+        for (int j = 0; j < W; ++j) {
+            const int i = k * W + j;
             const EndTermRequest& l = q[i < count ? i : 0];
             zeta[j] = l.zeta;
             r[k][j] = l.r;
             omr[k][j] = l.one_minus_r;
         }
         one_plus_r[k] = 1.0 + r[k];
-        const Pack alpha = PackLanes::sqrt(omr[k] * omr[k] + zeta * zeta);
-        const Pack beta = PackLanes::sqrt(one_plus_r[k] * one_plus_r[k] + zeta * zeta);
+        const V alpha = L::sqrt(omr[k] * omr[k] + zeta * zeta);
+        const V beta = L::sqrt(one_plus_r[k] * one_plus_r[k] + zeta * zeta);
         kc[k] = alpha / beta;
         zeta_over_beta[k] = zeta / beta;
-        const Pack k2 = (4.0 * r[k] / beta) / beta;
-        if (form == EndForm::Outside && !PackLanes::all(k2 >= min_split_k2)) return false;
+        const V k2 = (4.0 * r[k] / beta) / beta;
+        if (form == EndForm::Outside && !L::all(L::less_equal(L::splat(min_split_k2), k2))) return false;
         prefactor[k] = zeta_over_beta[k] * kInvPi / one_plus_r[k];
         vector_scale[k] = k2 * kInvPi / beta;
     }
-    Pack axial[K]{}, vector[K]{};
+    V axial[K]{}, vector[K]{};
     if (form == EndForm::Inside) {
-        CelPack<2> c[K]{};
+        CelPack<L, 2> c[K]{};
         for (int k = 0; k < K; ++k) {
-            const Pack g = omr[k] / one_plus_r[k];
+            const V g = omr[k] / one_plus_r[k];
             c[k].after_first_step(kc[k]);
             c[k].p[0] = g + kc[k] / g;
             c[k].a[0] = 1.0 + 1.0 / g;
@@ -269,46 +274,46 @@ COILWRIGHT_LANE_INLINE bool packs_of_a_form(const EndTermRequest* q, int count, 
         }
         finish_together(c);
         for (int k = 0; k < K; ++k) {
-            Pack v[2];
+            V v[2];
             c[k].results(v);
             axial[k] = prefactor[k] * v[0];
             vector[k] = vector_scale[k] * v[1];
         }
     } else if (form == EndForm::Outside) {
-        CelPack<3, true> c[K]{};
-        Pack g[K], kc_minus_g[K];
+        CelPack<L, 3, true> c[K]{};
+        V g[K], kc_minus_g[K];
         for (int k = 0; k < K; ++k) {
             g[k] = -omr[k] / one_plus_r[k];
             kc_minus_g[k] = ((4.0 * r[k] / one_plus_r[k]) * (zeta_over_beta[k] * zeta_over_beta[k]) / one_plus_r[k]) / (kc[k] + g[k]);
             c[k].after_first_step(kc[k]);
             c[k].p[0] = c[k].p[1] = g[k] + kc[k] / g[k];
-            c[k].a[0] = PackLanes::splat(1.0);
-            c[k].b[1] = PackLanes::splat(1.0);
+            c[k].a[0] = L::splat(1.0);
+            c[k].b[1] = L::splat(1.0);
             c[k].set_vector(2, kc[k]);
         }
         finish_together(c);
         for (int k = 0; k < K; ++k) {
-            Pack v[3];
+            V v[3];
             c[k].results(v);
-            const Pack delta = 2.0 / one_plus_r[k];
+            const V delta = 2.0 / one_plus_r[k];
             axial[k] = prefactor[k] * (delta * v[0] - 2.0 * kc_minus_g[k] * v[1]) / g[k];
             vector[k] = vector_scale[k] * v[2];
         }
     } else {
-        CelPack<1> c[K]{};
+        CelPack<L, 1> c[K]{};
         for (int k = 0; k < K; ++k) {
             c[k].after_first_step(kc[k]);
             c[k].set_vector(0, kc[k]);
         }
         finish_together(c);
         for (int k = 0; k < K; ++k) {
-            Pack v[1];
+            V v[1];
             c[k].results(v);
             vector[k] = vector_scale[k] * v[0];
         }
     }
-    for (int i = 0; i < count && i < K * kPackWidth; ++i) {
-        const int k = i / kPackWidth, j = i % kPackWidth;
+    for (int i = 0; i < count && i < K * W; ++i) {
+        const int k = i / W, j = i % W;
         out[i] = EndTerms{};
         if (form != EndForm::VectorOnly) out[i].axial = axial[k][j];
         if (q[i].want_vector && q[i].r > 0.0) out[i].vector = vector[k][j];
@@ -316,20 +321,25 @@ COILWRIGHT_LANE_INLINE bool packs_of_a_form(const EndTermRequest* q, int count, 
     return true;
 }
 
+// Runs of requests of one form in packs: eight lanes at a time as two four-lane packs (L4 = K8 =
+// the AVX2 copy) or one eight-lane pack (the AVX-512 copy), then four, then one by one.
+template <class Wide, int kWideCount>
 COILWRIGHT_LANE_INLINE void end_term_packs(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
+    constexpr int kWide = Wide::kWidth * kWideCount;
     for (int first = 0; first < count;) {
-        const int left = std::min(8, count - first);
+        const int left = std::min(kWide, count - first);
         const EndForm form = end_form_of(q[first]);
         int same = 1;
         while (same < left && end_form_of(q[first + same]) == form) ++same;
         const bool packable = form == EndForm::Inside || form == EndForm::Outside || form == EndForm::VectorOnly;
         // Lanes pay from two requests on; a short run of one form leaves the rest for the next.
-        if (packable && same >= 5 && packs_of_a_form<2>(q + first, same, form, min_split_k2, out + first)) {
+        if (packable && same > kWide / 2 &&
+            packs_of_a_form<Wide, kWideCount>(q + first, same, form, min_split_k2, out + first)) {
             first += same;
             continue;
         }
-        const int four = std::min(same, 4);
-        if (packable && four >= 2 && packs_of_a_form<1>(q + first, four, form, min_split_k2, out + first)) {
+        const int four = std::min(same, kPackWidth);
+        if (packable && four >= 2 && packs_of_a_form<PackLanes, 1>(q + first, four, form, min_split_k2, out + first)) {
             first += four;
             continue;
         }
@@ -339,9 +349,17 @@ COILWRIGHT_LANE_INLINE void end_term_packs(const EndTermRequest* q, int count, d
 }
 
 [[gnu::target("avx2"), gnu::flatten]] void end_terms_in_packs(const EndTermRequest* q, int count, double min_split_k2,
-                                                    EndTerms* out) {
-    end_term_packs(q, count, min_split_k2, out);
+                                                              EndTerms* out) {
+    end_term_packs<PackLanes, 2>(q, count, min_split_k2, out);
 }
+
+#ifdef COILWRIGHT_HAVE_AVX512_CODE
+#define COILWRIGHT_END_TERM_AVX512 1
+[[gnu::target("avx512f,avx512dq"), gnu::flatten]] void end_terms_in_wide_packs(const EndTermRequest* q, int count,
+                                                                              double min_split_k2, EndTerms* out) {
+    end_term_packs<FusedPack8Lanes, 1>(q, count, min_split_k2, out);  // its mul_add is not used here
+}
+#endif
 #endif
 
 }  // namespace
@@ -352,8 +370,12 @@ EndTerms end_terms(const EndTermRequest& q, double min_split_k2) {
 
 void end_terms_using(EndTermCode code, const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
 #ifdef COILWRIGHT_END_TERM_PACKS
+#ifdef COILWRIGHT_END_TERM_AVX512
+    static const bool wide = processor_has_avx512();
+    if (code == EndTermCode::Packs && wide) return end_terms_in_wide_packs(q, count, min_split_k2, out);
+#endif
     static const bool packs = processor_has_avx2_fma();
-    if (code == EndTermCode::Packs && packs) return end_terms_in_packs(q, count, min_split_k2, out);
+    if (code != EndTermCode::OneByOne && packs) return end_terms_in_packs(q, count, min_split_k2, out);
 #endif
     (void)code;
     end_terms_one_by_one(q, count, min_split_k2, out);

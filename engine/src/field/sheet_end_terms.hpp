@@ -29,9 +29,10 @@ void end_terms(const EndTermRequest* q, int count, double min_split_k2, EndTerms
 // W = Omega / (4 pi) by the trapezoidal sum of the solid angle; needs r^2 + zeta^2 > r.
 double disk_part_by_sum(double zeta, double r);
 
-// Which code end_terms over many requests uses: packs where the processor allows (the default)
-// or one request at a time (for the tests that compare the two).
-enum class EndTermCode { Packs, OneByOne };
+// Which code end_terms over many requests uses: the widest packs the processor allows (the
+// default: eight lanes with AVX-512, four with AVX2), four-lane packs, or one request at a time
+// (for the tests that compare them; each falls back to the next where the processor lacks it).
+enum class EndTermCode { Packs, FourLanes, OneByOne };
 void end_terms_using(EndTermCode code, const EndTermRequest* q, int count, double min_split_k2, EndTerms* out);
 
 }  // namespace coilwright::internal
