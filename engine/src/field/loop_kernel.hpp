@@ -211,8 +211,10 @@ template <class L>
 COILWRIGHT_LANE_INLINE auto in_kernel_range(typename L::V z_n, typename L::V r_n, typename L::V one_minus_r) {
     const typename L::V z2 = z_n * z_n;
     const auto reach = L::splat(kKernelReach);
-    return L::less(L::abs(z_n), reach) & L::less_equal(L::splat(0.0), r_n) & L::less(r_n, reach) &
-           L::less(L::splat(kKernelNearest2), one_minus_r * one_minus_r + z2);
+    // Each test into its own mask first: all four are taken (no branch), as bits for packs.
+    const auto near_in_z = L::less(L::abs(z_n), reach), not_negative = L::less_equal(L::splat(0.0), r_n);
+    const auto near_in_r = L::less(r_n, reach), off_the_wire = L::less(L::splat(kKernelNearest2), one_minus_r * one_minus_r + z2);
+    return near_in_z & not_negative & near_in_r & off_the_wire;
 }
 
 }  // namespace coilwright::internal
