@@ -20,7 +20,13 @@ struct EndTermRequest {
     bool want_axial, want_vector;
 };
 
-// Below this k^2 the axial term outside the radius is summed directly (disk_part_by_sum).
+// Below `min_split_k2` the axial term outside the radius is summed directly (disk_part_by_sum):
+// the split form of W (solenoid.cpp, item 2) loses about a factor 10 / k^2 (measured), so a
+// caller that accepts a loss L passes min_split_k2_for(L).
+inline double min_split_k2_for(double max_loss) {
+    constexpr double kFullPrecisionK2 = 0.7;
+    return max_loss * kFullPrecisionK2 < 10.0 ? kFullPrecisionK2 : 10.0 / max_loss;
+}
 EndTerms end_terms(const EndTermRequest& q, double min_split_k2);
 
 // `count` requests at once (out[i] for q[i]); requests of one form next to each other run in packs.

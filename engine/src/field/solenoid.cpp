@@ -63,9 +63,6 @@ namespace internal {
 
 namespace {
 
-// The split form of W (item 2) loses about a factor 10 / k^2 (measured); below this k^2 the direct
-// sum is used for full precision. Callers that accept a loss L use min(kSplitMinK2, 10 / L).
-constexpr double kSplitMinK2 = 0.7;
 // W for r <= 1 is 1/2 - G while G <= 3/8 (loss at most a factor 4), else the direct sum.
 constexpr double kInsideLimit = 0.375;
 // Gauss-Legendre replaces the closed form only where it converges quickly.
@@ -151,8 +148,6 @@ void set_request(EndTermRequest& q, const SheetPlan& s, double zeta) {
     q.want_axial = s.closed_bz;
     q.want_vector = s.closed_br;
 }
-
-double min_split_k2_for(double max_loss) { return std::min(kSplitMinK2, 10.0 / max_loss); }
 
 FieldRZ finish_sheet(const SheetPlan& s, const EndTerms& near, const EndTerms& far, double max_loss) {
     bool bz_quadrature = s.bz_quadrature, br_quadrature = s.br_quadrature;

@@ -37,9 +37,6 @@ namespace internal {
 
 namespace {
 
-// The sheets may lose this factor to cancellation between their two ends before they switch
-// to integrating along the length (about 1e-14 at most: well inside the 1e-12 aimed at).
-constexpr double kSheetMaxLoss = 256.0;
 // On the axis the closed form is used while its own cancellation stays below this factor.
 constexpr double kAxisMaxLoss = 256.0;
 // Gauss points per segment: ceil(kRadialExponent / ln rho), exactly (no rounding up to a stored
@@ -81,7 +78,7 @@ FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double
             const double per_a = 1.0 / a[i];  // one division instead of five (each product within an ulp)
             points[i] = SheetPoint{z * per_a, r * per_a, a_minus_r[i] * per_a, h * per_a, beyond * per_a};
         }
-        sheet_fields_normalized(points, n, kSheetMaxLoss, want, out);
+        sheet_fields_normalized(points, n, kThickSheetMaxLoss, want, out);
     };
     const RadialSingularities sing{r, {std::fabs(z - h), z + h}, 2};
     const FieldRZ f = integrate_over_radius(sheets, a1, a2, sing, {kRadialExponent});

@@ -11,9 +11,10 @@
 // one is smooth on each side of a = r and takes a handful. Half the end terms of the general
 // route, and no per-sheet checks.
 // Where it is used (near_a_winding_corner): windings at least a quarter as long as they are deep,
-// within a quarter of the smallest of build, length and inner radius of a corner, where neither
-// the sum nor the difference of the two integrals loses digits (tests check it against the general
-// route over random windings and points). The near integral takes more points per segment than
+// within a quarter of the smallest of build, length and inner radius of a corner, where the two
+// integrals are at most a few times the field (1.5e-14 of |B| at worst against mpmath next to
+// corners, where whole sheets reach 2e-15; tests check the route against whole sheets over
+// random windings and points). The near integral takes more points per segment than
 // the general route (exponent 20 instead of 18): without the far end's singular points its
 // segments are fewer, and the margin they gave the general route had to be put back (9e-12 of
 // |B| at exponent 18 next to a small winding's corner, 2e-13 at 20, against mpmath).
@@ -30,8 +31,6 @@ namespace {
 
 constexpr double kCornerReach = 0.25;
 constexpr double kMinLengthOverBuild = 0.25;
-// As the general route (thick_coil.cpp): the split form of W down to k^2 = 10 / 256.
-constexpr double kMinSplitK2 = 10.0 / 256.0;
 
 }  // namespace
 
@@ -62,7 +61,7 @@ FieldRZ thick_field_by_ends(double a1, double a2, double h, double z, double r, 
                 const double per_a = 1.0 / a[i];
                 q[i] = {zeta * per_a, r * per_a, a_minus_r[i] * per_a, want_bz, want_br};
             }
-            end_terms(q, n, kMinSplitK2, t);
+            end_terms(q, n, min_split_k2_for(kThickSheetMaxLoss), t);
             for (int i = 0; i < n; ++i)
                 out[i] = {(a_minus_r[i] >= 0.0 ? inside : outside) * t[i].axial, vector * t[i].vector};
         };

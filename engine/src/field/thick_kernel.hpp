@@ -6,6 +6,11 @@
 
 namespace coilwright::internal {
 
+// The loss to cancellation a sheet of a thick winding may accept before it integrates along its
+// length instead (about 1e-14 at most: well inside the 1e-12 aimed at); the route by ends uses
+// the end terms' forms of the same limit.
+inline constexpr double kThickSheetMaxLoss = 256.0;
+
 // Integral over the winding radius a in [a1, a2] of the thin-sheet field (sheet_kernel.hpp) of
 // half-length h: the field in units of mu0 J (so in metres). Unchecked.
 FieldRZ thick_field_per_density(double a1, double a2, double h, double z, double r,
