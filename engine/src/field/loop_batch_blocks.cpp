@@ -39,12 +39,11 @@ namespace {
 
 // Points go through the kernel in blocks of kPacks packs; within a block the packs take their
 // Gauss steps side by side, so the processor overlaps their long chains of square roots and
-// divisions instead of waiting for each in turn. A block holds at most kMaxBlock points (eight
-// packs of the widest lanes).
+// divisions instead of waiting for each in turn: kPacks times the lanes of the copy, 32 points
+// with four lanes, 64 with eight (block_for).
 constexpr std::size_t kPacks = 8;
-constexpr std::size_t kMaxBlock = 64;
 
-// Field at z[i] - centre_z, r[i] for one block of `count` <= kBlock points; stores (add =
+// Field at z[i] - centre_z, r[i] for one block of `count` <= kPacks * L::kWidth points; stores (add =
 // false) or adds (add = true) into bz, br. Returns the number of points in error. Compiled
 // once per instruction set by the wrappers below; `code` names the copy (for the points done
 // one by one).

@@ -321,8 +321,8 @@ COILWRIGHT_LANE_INLINE bool packs_of_a_form(const EndTermRequest* q, int count, 
     return true;
 }
 
-// Runs of requests of one form in packs: eight lanes at a time as two four-lane packs (L4 = K8 =
-// the AVX2 copy) or one eight-lane pack (the AVX-512 copy), then four, then one by one.
+// Runs of requests of one form in packs: eight at a time (two four-lane packs in the AVX2 copy,
+// one eight-lane pack in the AVX-512 copy), then four, then one by one.
 template <class Wide, int kWideCount>
 COILWRIGHT_LANE_INLINE void end_term_packs(const EndTermRequest* q, int count, double min_split_k2, EndTerms* out) {
     constexpr int kWide = Wide::kWidth * kWideCount;

@@ -35,14 +35,12 @@
 #include "coilwright/field/solenoid.hpp"
 
 #include <algorithm>
-#include <array>
 #include <cmath>
 #include <complex>
 
 #include "field/sheet_end_terms.hpp"
 #include "field/sheet_kernel.hpp"
 #include "field/loop_normalized.hpp"
-#include "numerics/bulirsch_cel.hpp"
 #include "numerics/checks.hpp"
 #include "coilwright/constants.hpp"
 #include "coilwright/errors.hpp"

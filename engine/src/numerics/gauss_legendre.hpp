@@ -39,12 +39,6 @@ inline double bernstein_semi_axis(double centre, double half_width, std::complex
     if (!(std::fabs(x) < 1e150 && y < 1e150)) return 1e150;  // far away (and no overflow below)
     return 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
 }
-// The same with 1 / half_width given (for many poles against one interval).
-inline double bernstein_semi_axis_scaled(double centre, double per_half_width, std::complex<double> pole) {
-    const double x = (pole.real() - centre) * per_half_width, y = std::fabs(pole.imag() * per_half_width);
-    if (!(std::fabs(x) < 1e150 && y < 1e150)) return 1e150;
-    return 0.5 * (std::sqrt((x - 1.0) * (x - 1.0) + y * y) + std::sqrt((x + 1.0) * (x + 1.0) + y * y));
-}
 inline double bernstein_rho_of_axis(double A) { return A >= 1e150 ? 1e150 : A + std::sqrt((A - 1.0) * (A + 1.0)); }
 inline double bernstein_rho(double centre, double half_width, std::complex<double> pole) {
     return bernstein_rho_of_axis(bernstein_semi_axis(centre, half_width, pole));

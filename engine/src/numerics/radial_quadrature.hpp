@@ -133,8 +133,7 @@ FieldRZ integrate_segment(const Kernel& kernel, const Map& at, double t0, double
                           std::size_t n_poles, const RadialQuadratureOptions& opt, int depth) {
     const double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
     double axis = HUGE_VAL;
-    const double per_half = 1.0 / half;
-    for (std::size_t k = 0; k < n_poles; ++k) axis = std::min(axis, bernstein_semi_axis_scaled(centre, per_half, poles[k]));
+    for (std::size_t k = 0; k < n_poles; ++k) axis = std::min(axis, bernstein_semi_axis(centre, half, poles[k]));
     const double rho = bernstein_rho_of_axis(axis);
     if (rho < opt.min_rho && depth < opt.max_depth) {
         FieldRZ sum = integrate_segment(kernel, at, t0, centre, poles, n_poles, opt, depth + 1);
